@@ -1,0 +1,38 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { Module } from '@nestjs/common';
+import { ConfigModule } from '@nestjs/config';
+import { APP_GUARD } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { AuthModule } from './auth/auth.module';
+import { JwtAuthGuard } from './auth/jwt-auth.guard';
+import { AuthorizationModule } from './authorization/authorization.module';
+import { PoliciesGuard } from './authorization/policies.guard';
+import { loadEnvironment } from './config/environment';
+import { FRONTEND_DIST } from './config/paths';
+import { DatabaseModule } from './database/database.module';
+import { HealthModule } from './health/health.module';
+import { UsersModule } from './users/users.module';
+
+// The built web app, when there is one; every non-API path gets index.html (client routing).
+const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
+  ? [ServeStaticModule.forRoot({ rootPath: FRONTEND_DIST, exclude: ['/api{/*path}'] })]
+  : [];
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: loadEnvironment }),
+    DatabaseModule,
+    AuthorizationModule,
+    AuthModule,
+    UsersModule,
+    HealthModule,
+    ...webApp,
+  ],
+  providers: [
+    // Order matters: first who you are, then what you may do.
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: PoliciesGuard },
+  ],
+})
+export class AppModule {}

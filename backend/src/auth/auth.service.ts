@@ -1,0 +1,76 @@
+import { EntityManager } from '@mikro-orm/sqlite';
+import { Injectable, UnauthorizedException } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import type { AbilityRule, LoginResponse, MeResponse } from '@tiermode/shared-types';
+import type { AppAbility } from '../authorization/app-ability';
+import { hashPassword, verifyPassword } from '../users/password-hasher';
+import { User } from '../users/user.entity';
+import { toUserDto } from '../users/user.mapper';
+import { JWT_LIFETIME_SECONDS, type TokenClaims } from './jwt-claims';
+import { LoginThrottleService } from './login-throttle.service';
+
+/** Says nothing about which part was wrong. */
+const BAD_CREDENTIALS = 'Email or password is incorrect';
+
+@Injectable()
+export class AuthService {
+  // Compared against when the email is unknown, so both failures take the same time.
+  private readonly decoyHash = hashPassword('decoy-password-never-issued');
+
+  constructor(
+    private readonly em: EntityManager,
+    private readonly jwt: JwtService,
+    private readonly throttle: LoginThrottleService,
+  ) {}
+
+  async login(email: string, password: string, client: string): Promise<LoginResponse> {
+    this.throttle.assertNotBlocked(client);
+    const user = await this.em.findOne(
+      User,
+      { email: email.trim().toLowerCase() },
+      { populate: ['passwordHash'] },
+    );
+    const matches = await verifyPassword(password, user?.passwordHash ?? (await this.decoyHash));
+    if (!user || !matches || !user.active) {
+      await this.throttle.recordFailure(client);
+      throw new UnauthorizedException(BAD_CREDENTIALS);
+    }
+    return this.issue(user);
+  }
+
+  me(user: User, ability: AppAbility): MeResponse {
+    return { user: toUserDto(user), rules: ability.rules as AbilityRule[] };
+  }
+
+  /** Signing out ends every session of the user: tokens issued before no longer work. */
+  async logout(user: User): Promise<void> {
+    user.sessionVersion += 1;
+    await this.em.flush();
+  }
+
+  /** Changes the caller's password, ends its other sessions and returns a fresh token. */
+  async changePassword(
+    user: User,
+    currentPassword: string,
+    newPassword: string,
+    client: string,
+  ): Promise<LoginResponse> {
+    this.throttle.assertNotBlocked(client);
+    await this.em.populate(user, ['passwordHash']);
+    if (!(await verifyPassword(currentPassword, user.passwordHash))) {
+      await this.throttle.recordFailure(client);
+      throw new UnauthorizedException('currentPassword is incorrect');
+    }
+    user.passwordHash = await hashPassword(newPassword);
+    user.sessionVersion += 1;
+    await this.em.flush();
+    return this.issue(user);
+  }
+
+  private async issue(user: User): Promise<LoginResponse> {
+    const claims: TokenClaims = { sub: user.id, sv: user.sessionVersion };
+    const accessToken = await this.jwt.signAsync(claims);
+    const expiresAt = new Date(Date.now() + JWT_LIFETIME_SECONDS * 1000).toISOString();
+    return { accessToken, expiresAt, user: toUserDto(user) };
+  }
+}

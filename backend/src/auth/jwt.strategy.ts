@@ -1,0 +1,41 @@
+import { EntityManager } from '@mikro-orm/sqlite';
+import { Injectable, UnauthorizedException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { PassportStrategy } from '@nestjs/passport';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import type { AppEnvironment } from '../config/environment';
+import { User } from '../users/user.entity';
+import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER, type TokenClaims } from './jwt-claims';
+
+/**
+ * passport-jwt verifies the token (signature with HS256 only, expiry, issuer, audience); this
+ * strategy then loads the user, so a deactivated user or a token from before the last sign-out
+ * or password change is refused at once.
+ */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy) {
+  constructor(
+    config: ConfigService<AppEnvironment, true>,
+    private readonly em: EntityManager,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: config.get('jwtSecret', { infer: true }),
+      algorithms: [JWT_ALGORITHM],
+      issuer: JWT_ISSUER,
+      audience: JWT_AUDIENCE,
+      ignoreExpiration: false,
+    });
+  }
+
+  async validate(claims: TokenClaims): Promise<User> {
+    if (typeof claims.sub !== 'string' || typeof claims.sv !== 'number') {
+      throw new UnauthorizedException('Your sign-in is not valid; please sign in again');
+    }
+    const user = await this.em.findOne(User, { id: claims.sub });
+    if (!user || !user.active || user.sessionVersion !== claims.sv) {
+      throw new UnauthorizedException('Your sign-in has ended; please sign in again');
+    }
+    return user;
+  }
+}

@@ -1,0 +1,54 @@
+import { AbilityBuilder, createMongoAbility } from '@casl/ability';
+import { Injectable } from '@nestjs/common';
+import type { User } from '../users/user.entity';
+import type { AppAbility } from './app-ability';
+import { isLicensed } from './licence';
+
+/**
+ * The one place that says who may do what. The client rebuilds the same ability from
+ * `ability.rules` (GET /api/auth/me), so screens hide what the server would refuse.
+ * Features that add subjects extend the rules here.
+ */
+@Injectable()
+export class AbilityFactory {
+  createForUser(user: User, today: Date = new Date()): AppAbility {
+    const { can, cannot, build } = new AbilityBuilder<AppAbility>(createMongoAbility);
+
+    // Everyone signed in reads their own account and may run a stateless analysis.
+    can('read', 'User', { id: user.id });
+    can('create', 'Analysis');
+    can('read', 'Library');
+
+    switch (user.role) {
+      case 'admin':
+        can('manage', 'User');
+        // An admin may not deactivate or demote itself: that could lock the firm out.
+        cannot('update', 'User', ['active', 'role'], { id: user.id }).because(
+          'You cannot deactivate your own account or change your own role',
+        );
+        can('read', 'Outbox');
+        break;
+      case 'designer':
+        can('create', 'Project');
+        can('read', 'Project');
+        can('read', 'Calculation');
+        break;
+      case 'reviewer':
+        can('read', 'Project');
+        can('read', 'Calculation');
+        can(['comment', 'return'], 'Calculation');
+        if (isLicensed(user, today)) {
+          can('lock', 'Calculation');
+          cannot('lock', 'Calculation', { authorId: user.id }).because(
+            'A reviewer cannot lock a calculation it wrote',
+          );
+        }
+        break;
+      case 'student':
+        // Students read calcs of record only, never drafts.
+        can('read', 'Calculation', { status: { $in: ['locked', 'superseded'] } });
+        break;
+    }
+    return build();
+  }
+}

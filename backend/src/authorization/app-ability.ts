@@ -1,0 +1,8 @@
+import type { MongoAbility, MongoQuery } from '@casl/ability';
+import type { Action, Subject } from '@tiermode/shared-types';
+import type { User } from '../users/user.entity';
+
+/** What a rule may be checked against: a subject name, or a record tagged with `subject()`. */
+type SubjectRecords = { User: User };
+export type AppSubject = Subject | SubjectRecords[keyof SubjectRecords];
+export type AppAbility = MongoAbility<[Action, AppSubject], MongoQuery>;

@@ -1,0 +1,93 @@
+import { ForbiddenError } from '@casl/ability';
+import {
+  NotFoundError,
+  OptimisticLockError,
+  UniqueConstraintViolationException,
+} from '@mikro-orm/core';
+import {
+  ArgumentsHost,
+  Catch,
+  ExceptionFilter,
+  HttpException,
+  HttpStatus,
+  Logger,
+} from '@nestjs/common';
+import type { ApiErrorBody } from '@tiermode/shared-types';
+import type { Response } from 'express';
+
+/**
+ * Every error leaves as `{ statusCode, message: string[], error }`. Authorization, ORM and
+ * body-parser errors get their proper 4xx; anything unexpected is logged and answered with a
+ * plain 500 that reveals nothing of the internals.
+ */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('Exceptions');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const response = host.switchToHttp().getResponse<Response>();
+    const { statusCode, message } = this.describe(exception);
+    const body: ApiErrorBody = {
+      statusCode,
+      message: Array.isArray(message) ? message : [message],
+      error: httpStatusName(statusCode),
+    };
+    response.status(statusCode).json(body);
+  }
+
+  private describe(exception: unknown): { statusCode: number; message: string | string[] } {
+    if (exception instanceof HttpException) {
+      const payload = exception.getResponse();
+      const message =
+        typeof payload === 'string'
+          ? payload
+          : ((payload as { message?: string | string[] }).message ?? exception.message);
+      return { statusCode: exception.getStatus(), message };
+    }
+    if (exception instanceof ForbiddenError) {
+      return { statusCode: HttpStatus.FORBIDDEN, message: exception.message };
+    }
+    if (exception instanceof OptimisticLockError) {
+      return {
+        statusCode: HttpStatus.CONFLICT,
+        message: 'This record was changed by someone else; reload and try again',
+      };
+    }
+    if (exception instanceof UniqueConstraintViolationException) {
+      return { statusCode: HttpStatus.CONFLICT, message: 'A record with these values already exists' };
+    }
+    if (exception instanceof NotFoundError) {
+      return { statusCode: HttpStatus.NOT_FOUND, message: 'Not found' };
+    }
+    const clientError = asClientHttpError(exception);
+    if (clientError) return clientError;
+    this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
+  }
+}
+
+/**
+ * body-parser and multer raise http-errors with a 4xx `status` (body too large, ...). Nest itself
+ * turns bad JSON into a 400 naming the parse error.
+ */
+function asClientHttpError(exception: unknown): { statusCode: number; message: string } | null {
+  if (typeof exception !== 'object' || exception === null) return null;
+  const { status, expose, type } = exception as { status?: unknown; expose?: unknown; type?: unknown };
+  if (typeof status !== 'number' || status < 400 || status > 499 || expose !== true) return null;
+  const messages: Record<string, string> = {
+    'entity.too.large': 'The request body is too large',
+  };
+  const known = typeof type === 'string' ? messages[type] : undefined;
+  return { statusCode: status, message: known ?? 'The request could not be read' };
+}
+
+function httpStatusName(statusCode: number): string {
+  const name = HttpStatus[statusCode];
+  return typeof name === 'string'
+    ? name
+        .toLowerCase()
+        .split('_')
+        .map((w) => w[0].toUpperCase() + w.slice(1))
+        .join(' ')
+    : 'Error';
+}

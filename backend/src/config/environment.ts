@@ -1,0 +1,104 @@
+import { randomBytes } from 'node:crypto';
+import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { plainToInstance } from 'class-transformer';
+import {
+  IsEmail,
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  Max,
+  MinLength,
+  Min,
+  validateSync,
+} from 'class-validator';
+import { DEFAULT_DATABASE_PATH } from './paths';
+
+/** The environment as read at start-up; anything else in process.env is ignored. */
+class EnvironmentVariables {
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  PORT?: number;
+
+  @IsOptional()
+  @IsString()
+  @MinLength(1)
+  DATABASE_PATH?: string;
+
+  @IsOptional()
+  @IsString()
+  @MinLength(32, { message: 'JWT_SECRET must be at least 32 characters long' })
+  JWT_SECRET?: string;
+
+  @IsOptional()
+  @IsIn(['on', 'off'], { message: 'DEMO must be "on" or "off"' })
+  DEMO?: 'on' | 'off';
+
+  @IsOptional()
+  @IsEmail({}, { message: 'ADMIN_EMAIL must be an email address' })
+  ADMIN_EMAIL?: string;
+
+  @IsOptional()
+  @IsString()
+  ADMIN_PASSWORD?: string;
+}
+
+/** The resolved settings the app reads through ConfigService. */
+export interface AppEnvironment {
+  port: number;
+  databasePath: string;
+  jwtSecret: string;
+  demoMode: boolean;
+  adminEmail?: string;
+  adminPassword?: string;
+}
+
+/**
+ * Reads and checks the environment once at start-up and fails with every problem named.
+ * JWT_SECRET, when unset, is generated once and kept beside the database (mode 0600).
+ */
+export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
+  const picked = {
+    PORT: raw.PORT === undefined || raw.PORT === '' ? undefined : Number(raw.PORT),
+    DATABASE_PATH: emptyToUndefined(raw.DATABASE_PATH),
+    JWT_SECRET: emptyToUndefined(raw.JWT_SECRET),
+    DEMO: emptyToUndefined(raw.DEMO),
+    ADMIN_EMAIL: emptyToUndefined(raw.ADMIN_EMAIL),
+    ADMIN_PASSWORD: emptyToUndefined(raw.ADMIN_PASSWORD),
+  };
+  const env = plainToInstance(EnvironmentVariables, picked);
+  const errors = validateSync(env, { skipMissingProperties: false });
+  if (errors.length > 0) {
+    const lines = errors.flatMap((e) => Object.values(e.constraints ?? {}));
+    throw new Error(`Invalid environment:\n- ${lines.join('\n- ')}`);
+  }
+  const databasePath = resolve(env.DATABASE_PATH ?? DEFAULT_DATABASE_PATH);
+  return {
+    port: env.PORT ?? 3000,
+    databasePath,
+    jwtSecret: env.JWT_SECRET ?? persistedSecret(dirname(databasePath)),
+    demoMode: (env.DEMO ?? 'on') === 'on',
+    adminEmail: env.ADMIN_EMAIL,
+    adminPassword: env.ADMIN_PASSWORD,
+  };
+}
+
+function emptyToUndefined(value: unknown): unknown {
+  return value === '' ? undefined : value;
+}
+
+function persistedSecret(dataDir: string): string {
+  const file = join(dataDir, 'jwt-secret');
+  if (existsSync(file)) {
+    const kept = readFileSync(file, 'utf8').trim();
+    if (kept.length >= 32) return kept;
+  }
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(48).toString('base64url');
+  writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  chmodSync(file, 0o600);
+  return secret;
+}

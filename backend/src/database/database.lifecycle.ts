@@ -1,0 +1,26 @@
+import { MikroORM } from '@mikro-orm/sqlite';
+import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { AppEnvironment } from '../config/environment';
+import { prepareDatabase } from './prepare-database';
+
+/** The server migrates and seeds before it listens, so a bare `npm run serve` also works. */
+@Injectable()
+export class DatabaseLifecycle implements OnApplicationBootstrap {
+  private readonly logger = new Logger('Database');
+
+  constructor(
+    private readonly orm: MikroORM,
+    private readonly config: ConfigService<AppEnvironment, true>,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    const { applied, seed } = await prepareDatabase(this.orm, {
+      demoMode: this.config.get('demoMode', { infer: true }),
+      adminEmail: this.config.get('adminEmail', { infer: true }),
+      adminPassword: this.config.get('adminPassword', { infer: true }),
+    });
+    if (applied.length > 0) this.logger.log(`Applied migrations: ${applied.join(', ')}`);
+    if (seed !== 'nothing-to-do') this.logger.log(`Seed: ${seed}`);
+  }
+}

@@ -1,0 +1,26 @@
+import { EntityManager, MikroORM } from '@mikro-orm/sqlite';
+import { Controller, Get, ServiceUnavailableException } from '@nestjs/common';
+import type { HealthResponse } from '@tiermode/shared-types';
+import { Public } from '../common/decorators/public.decorator';
+
+@Controller('health')
+export class HealthController {
+  constructor(
+    private readonly orm: MikroORM,
+    private readonly em: EntityManager,
+  ) {}
+
+  /** 200 once the database is open and every committed migration is applied. */
+  @Public()
+  @Get()
+  async check(): Promise<HealthResponse> {
+    try {
+      await this.em.getConnection().execute('select 1');
+      const pending = await this.orm.getMigrator().getPendingMigrations();
+      if (pending.length > 0) throw new Error(`${pending.length} migrations pending`);
+    } catch {
+      throw new ServiceUnavailableException('The database is not ready');
+    }
+    return { status: 'ok' };
+  }
+}

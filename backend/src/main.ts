@@ -1,0 +1,19 @@
+import 'reflect-metadata';
+import { Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { NestFactory } from '@nestjs/core';
+import { AppModule } from './app.module';
+import { configureApp } from './app.setup';
+import type { AppEnvironment } from './config/environment';
+
+async function bootstrap(): Promise<void> {
+  const app = configureApp(await NestFactory.create(AppModule));
+  const port = app.get(ConfigService<AppEnvironment, true>).get('port', { infer: true });
+  await app.listen(port);
+  Logger.log(`Tiermode is serving on http://localhost:${port}`, 'Bootstrap');
+}
+
+bootstrap().catch((error: unknown) => {
+  Logger.error(error instanceof Error ? error.message : String(error), 'Bootstrap');
+  process.exit(1);
+});

@@ -1,0 +1,7 @@
+import type { MigrationObject } from '@mikro-orm/core';
+import { Migration20261201215434 } from './Migration20261201215434';
+
+/** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
+export const MIGRATIONS: MigrationObject[] = [
+  { name: 'Migration20261201215434', class: Migration20261201215434 },
+];

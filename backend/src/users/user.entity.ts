@@ -1,0 +1,55 @@
+import { randomUUID } from 'node:crypto';
+import { Entity, Enum, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import { ROLES, type Role } from '@tiermode/shared-types';
+
+@Entity({ tableName: 'users' })
+export class User {
+  [OptionalProps]?: 'active' | 'sessionVersion' | 'createdAt' | 'updatedAt' | 'version';
+
+  @PrimaryKey({ type: 'uuid' })
+  id: string = randomUUID();
+
+  /** Stored lower-cased; sign-in compares lower-cased. */
+  @Property({ type: 'string', length: 254, unique: true })
+  email!: string;
+
+  @Property({ type: 'string', length: 200 })
+  name!: string;
+
+  @Enum({ items: () => [...ROLES], type: 'string' })
+  role!: Role;
+
+  /** bcrypt hash; `hidden` keeps it out of any serialisation. */
+  @Property({ type: 'string', hidden: true, lazy: true })
+  passwordHash!: string;
+
+  /** Deactivated users keep their history but cannot sign in; existing tokens stop working. */
+  @Property({ type: 'boolean' })
+  active: boolean = true;
+
+  /**
+   * Carried in each token as `sv`. Signing out or changing the password increments it, so every
+   * token issued before stops working.
+   */
+  @Property({ type: 'integer' })
+  sessionVersion: number = 1;
+
+  @Property({ type: 'string', length: 100, nullable: true })
+  licenseNumber: string | null = null;
+
+  @Property({ type: 'string', length: 100, nullable: true })
+  licenseJurisdiction: string | null = null;
+
+  /** ISO date YYYY-MM-DD: the licence is current through this day. */
+  @Property({ type: 'string', length: 10, nullable: true })
+  licenseExpiresOn: string | null = null;
+
+  @Property({ type: 'datetime' })
+  createdAt: Date = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Date = new Date();
+
+  @Property({ type: 'integer', version: true })
+  version!: number;
+}

@@ -1,0 +1,35 @@
+import { Body, Controller, Get, Param, Patch, Post } from '@nestjs/common';
+import type { UserDto } from '@tiermode/shared-types';
+import type { AppAbility } from '../authorization/app-ability';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { CurrentAbility } from '../authorization/current.decorators';
+import { UuidParam } from '../common/pipes/uuid-param.pipe';
+import { CreateUserDto } from './dto/create-user.dto';
+import { UpdateUserDto } from './dto/update-user.dto';
+import { UsersService } from './users.service';
+
+/** People and licences: admins only. */
+@Controller('users')
+@CheckPolicies((ability) => ability.can('manage', 'User'))
+export class UsersController {
+  constructor(private readonly users: UsersService) {}
+
+  @Get()
+  list(@CurrentAbility() ability: AppAbility): Promise<UserDto[]> {
+    return this.users.list(ability);
+  }
+
+  @Post()
+  create(@CurrentAbility() ability: AppAbility, @Body() body: CreateUserDto): Promise<UserDto> {
+    return this.users.create(ability, body);
+  }
+
+  @Patch(':id')
+  update(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+    @Body() body: UpdateUserDto,
+  ): Promise<UserDto> {
+    return this.users.update(ability, id, body);
+  }
+}

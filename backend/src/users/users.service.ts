@@ -1,0 +1,91 @@
+import { subject } from '@casl/ability';
+import { ForbiddenError } from '@casl/ability';
+import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/sqlite';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import type { UserDto } from '@tiermode/shared-types';
+import { accessibleWhere } from '../authorization/accessible-where';
+import type { AppAbility } from '../authorization/app-ability';
+import type { CreateUserDto } from './dto/create-user.dto';
+import type { UpdateUserDto } from './dto/update-user.dto';
+import { hashPassword } from './password-hasher';
+import { User } from './user.entity';
+import { toUserDto } from './user.mapper';
+
+const EMAIL_TAKEN = 'email is already used by another account';
+
+@Injectable()
+export class UsersService {
+  constructor(private readonly em: EntityManager) {}
+
+  async list(ability: AppAbility): Promise<UserDto[]> {
+    const where = accessibleWhere(ability, 'read', 'User');
+    if (where === null) return [];
+    const users = await this.em.find(User, where, { orderBy: { name: 'asc', email: 'asc' } });
+    return users.map((u) => toUserDto(u));
+  }
+
+  async create(ability: AppAbility, body: CreateUserDto): Promise<UserDto> {
+    ForbiddenError.from(ability).throwUnlessCan('create', 'User');
+    await this.assertEmailFree(body.email);
+    const user = this.em.create(User, {
+      email: body.email,
+      name: body.name,
+      role: body.role,
+      passwordHash: await hashPassword(body.password),
+      licenseNumber: body.licenseNumber ?? null,
+      licenseJurisdiction: body.licenseJurisdiction ?? null,
+      licenseExpiresOn: body.licenseExpiresOn ?? null,
+    });
+    await this.em.flush();
+    return toUserDto(user);
+  }
+
+  async update(ability: AppAbility, id: string, body: UpdateUserDto): Promise<UserDto> {
+    const user = await this.em.findOne(User, { id });
+    if (!user) throw new NotFoundException(`No user with id ${id}`);
+    const record = subject('User', user);
+    ForbiddenError.from(ability).throwUnlessCan('update', record);
+    if (body.active !== undefined && body.active !== user.active) {
+      ForbiddenError.from(ability).throwUnlessCan('update', record, 'active');
+    }
+    if (body.role !== undefined && body.role !== user.role) {
+      ForbiddenError.from(ability).throwUnlessCan('update', record, 'role');
+    }
+    if (body.version !== undefined) {
+      try {
+        await this.em.lock(user, LockMode.OPTIMISTIC, body.version);
+      } catch (error) {
+        if (error instanceof OptimisticLockError) {
+          throw new ConflictException(
+            `This user was changed by someone else (version ${user.version}, yours ${body.version}); reload and try again`,
+          );
+        }
+        throw error;
+      }
+    }
+    if (body.email !== undefined && body.email !== user.email) {
+      await this.assertEmailFree(body.email);
+      user.email = body.email;
+    }
+    if (body.name !== undefined) user.name = body.name;
+    if (body.role !== undefined) user.role = body.role;
+    if (body.licenseNumber !== undefined) user.licenseNumber = body.licenseNumber;
+    if (body.licenseJurisdiction !== undefined) user.licenseJurisdiction = body.licenseJurisdiction;
+    if (body.licenseExpiresOn !== undefined) user.licenseExpiresOn = body.licenseExpiresOn;
+    if (body.active !== undefined && body.active !== user.active) {
+      user.active = body.active;
+      // Deactivation ends every session at once; the JWT strategy also checks `active`.
+      user.sessionVersion += 1;
+    }
+    if (body.password !== undefined) {
+      user.passwordHash = await hashPassword(body.password);
+      user.sessionVersion += 1;
+    }
+    await this.em.flush();
+    return toUserDto(user);
+  }
+
+  private async assertEmailFree(email: string): Promise<void> {
+    if ((await this.em.count(User, { email })) > 0) throw new ConflictException(EMAIL_TAKEN);
+  }
+}

@@ -1,0 +1,82 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { MikroORM } from '@mikro-orm/sqlite';
+import { prepareDatabase } from '../src/database/prepare-database';
+import { createOrmConfig } from '../src/mikro-orm.config';
+import { User } from '../src/users/user.entity';
+
+async function freshOrm(): Promise<MikroORM> {
+  const dir = mkdtempSync(join(tmpdir(), 'tiermode-seed-'));
+  return MikroORM.init(createOrmConfig(join(dir, 'db.sqlite')));
+}
+
+describe('Migrations and seeding', () => {
+  it('migrates an empty database, seeds the four demo accounts once, and is safe to rerun', async () => {
+    const orm = await freshOrm();
+    try {
+      const first = await prepareDatabase(orm, { demoMode: true });
+      expect(first.applied.length).toBeGreaterThan(0);
+      expect(first.seed).toBe('demo-accounts-created');
+      const again = await prepareDatabase(orm, { demoMode: true });
+      expect(again).toEqual({ applied: [], seed: 'nothing-to-do' });
+      const users = await orm.em.fork().find(User, {}, { orderBy: { email: 'asc' } });
+      expect(users.map((u) => [u.email, u.role])).toEqual([
+        ['admin@tiermode.test', 'admin'],
+        ['designer@tiermode.test', 'designer'],
+        ['reviewer@tiermode.test', 'reviewer'],
+        ['student@tiermode.test', 'student'],
+      ]);
+    } finally {
+      await orm.close();
+    }
+  });
+
+  it('sets WAL journaling, full sync, a busy timeout and foreign keys on the connection', async () => {
+    const orm = await freshOrm();
+    try {
+      const pragma = async (name: string) =>
+        Object.values((await orm.em.getConnection().execute(`pragma ${name}`))[0])[0];
+      expect(await pragma('journal_mode')).toBe('wal');
+      expect(await pragma('synchronous')).toBe(2); // 2 = FULL
+      expect(await pragma('busy_timeout')).toBe(5000);
+      expect(await pragma('foreign_keys')).toBe(1);
+    } finally {
+      await orm.close();
+    }
+  });
+
+  it('with DEMO=off creates the first admin from ADMIN_EMAIL and ADMIN_PASSWORD, and no demo accounts', async () => {
+    const orm = await freshOrm();
+    try {
+      await expect(prepareDatabase(orm, { demoMode: false })).rejects.toThrow(
+        'DEMO=off on an empty database: set ADMIN_EMAIL and ADMIN_PASSWORD to create the first admin',
+      );
+      await expect(
+        prepareDatabase(orm, { demoMode: false, adminEmail: 'it@firm.test', adminPassword: 'password123' }),
+      ).rejects.toThrow('ADMIN_PASSWORD is one of the most common passwords');
+      const result = await prepareDatabase(orm, {
+        demoMode: false,
+        adminEmail: 'IT@firm.test',
+        adminPassword: 'lintel-corbel-2031',
+      });
+      expect(result.seed).toBe('first-admin-created');
+      const users = await orm.em.fork().find(User, {});
+      expect(users.map((u) => [u.email, u.role])).toEqual([['it@firm.test', 'admin']]);
+    } finally {
+      await orm.close();
+    }
+  });
+
+  it('with DEMO=off deactivates demo accounts left by an earlier demo run', async () => {
+    const orm = await freshOrm();
+    try {
+      await prepareDatabase(orm, { demoMode: true });
+      await prepareDatabase(orm, { demoMode: false });
+      const users = await orm.em.fork().find(User, {});
+      expect(users.every((u) => !u.active)).toBe(true);
+    } finally {
+      await orm.close();
+    }
+  });
+});

@@ -1,0 +1,8 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+// Each e2e test file runs in its own worker module registry: give it a fresh database.
+process.env.DATABASE_PATH = join(mkdtempSync(join(tmpdir(), 'tiermode-e2e-')), 'test.sqlite');
+process.env.JWT_SECRET = 'e2e-secret-that-is-long-enough-for-hs256-0123456789';
+process.env.DEMO = 'on';

@@ -1,0 +1,27 @@
+import type { AbilityRule } from './abilities';
+import type { UserDto } from './users';
+
+/** `POST /api/auth/login`. */
+export interface LoginRequest {
+  email: string;
+  password: string;
+}
+
+export interface LoginResponse {
+  accessToken: string;
+  /** ISO time the token stops working. */
+  expiresAt: string;
+  user: UserDto;
+}
+
+/** `GET /api/auth/me`: the user and the CASL rules the client builds its ability from. */
+export interface MeResponse {
+  user: UserDto;
+  rules: AbilityRule[];
+}
+
+/** `POST /api/auth/password`: a signed-in user changes its own password. */
+export interface ChangePasswordRequest {
+  currentPassword: string;
+  newPassword: string;
+}

@@ -1,0 +1,5 @@
+export * from './roles';
+export * from './abilities';
+export * from './users';
+export * from './auth';
+export * from './http';
