@@ -1,0 +1,49 @@
+import { mkdirSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { inject } from 'vitest';
+
+export const SCREENSHOTS = resolve(__dirname, '..', 'screenshots');
+export const DEMO_PASSWORD = 'tiermode-demo';
+export type DemoRole = 'admin' | 'designer' | 'reviewer' | 'student';
+
+/**
+ * Debian's chromium, never a downloaded browser, with the flags this machine needs. Playwright
+ * gives each launch a new empty profile of its own.
+ */
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+    ],
+  });
+}
+
+export async function newPage(browser: Browser): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({
+    baseURL: inject('baseURL'),
+    viewport: { width: 1366, height: 860 },
+  });
+  const page = await context.newPage();
+  return { context, page };
+}
+
+export async function signIn(page: Page, role: DemoRole, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('Email').fill(`${role}@tiermode.test`);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  await page.screenshot({ path: join(SCREENSHOTS, `${name}.png`), fullPage: true });
+}

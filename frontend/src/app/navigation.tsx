@@ -1,0 +1,22 @@
+import GroupIcon from '@mui/icons-material/Group';
+import HomeIcon from '@mui/icons-material/Home';
+import type { Action, Subject } from '@tiermode/shared-types';
+import type { NavEntry } from '@/components/layouts/app-shell';
+import type { AppAbility } from '@/lib/ability';
+
+interface GuardedEntry extends NavEntry {
+  /** Shown only to users whose ability allows this; omitted means every signed-in user. */
+  requires?: [Action, Subject];
+}
+
+/** Every page of the app; each feature that adds a page adds its entry here. */
+const ENTRIES: GuardedEntry[] = [
+  { label: 'Start', to: '/', icon: <HomeIcon /> },
+  { label: 'People', to: '/users', icon: <GroupIcon />, requires: ['manage', 'User'] },
+];
+
+export function navigationFor(ability: AppAbility): NavEntry[] {
+  return ENTRIES.filter((e) => !e.requires || ability.can(...e.requires)).map(
+    ({ label, to, icon }) => ({ label, to, icon }),
+  );
+}

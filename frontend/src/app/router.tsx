@@ -1,0 +1,23 @@
+import { createBrowserRouter, RouterProvider } from 'react-router';
+import { NotFound } from '@/components/errors/not-found';
+import { AppRoot } from './routes/app-root';
+import { HomeRoute } from './routes/home';
+import { SignInRoute } from './routes/sign-in';
+import { UsersRoute } from './routes/users';
+
+const router = createBrowserRouter([
+  { path: '/sign-in', element: <SignInRoute /> },
+  {
+    path: '/',
+    element: <AppRoot />,
+    children: [
+      { index: true, element: <HomeRoute /> },
+      { path: 'users', element: <UsersRoute /> },
+      { path: '*', element: <NotFound /> },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,21 @@
+import react from '@vitejs/plugin-react';
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
+  server: {
+    port: 5173,
+    // `npm run dev`: the API runs on its own port under watch.
+    proxy: { '/api': { target: `http://localhost:${process.env.PORT ?? 3000}` } },
+  },
+  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 2000 },
+  test: {
+    environment: 'jsdom',
+    globals: true,
+    setupFiles: ['./src/testing/setup-tests.ts'],
+    include: ['src/**/*.test.{ts,tsx}'],
+    css: false,
+  },
+});
