@@ -30,8 +30,10 @@ export function createOrmConfig(databasePath: string) {
     pool: {
       min: 1,
       max: 1,
-      afterCreate: (connection: Sqlite3Connection, done: (error: Error | null, c: unknown) => void) =>
-        connection.exec(CONNECTION_PRAGMAS, (error) => done(error, connection)),
+      afterCreate: (
+        connection: Sqlite3Connection,
+        done: (error: Error | null, c: unknown) => void,
+      ) => connection.exec(CONNECTION_PRAGMAS, (error) => done(error, connection)),
     },
     migrations: {
       tableName: 'mikro_orm_migrations',

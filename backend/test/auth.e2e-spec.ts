@@ -51,7 +51,10 @@ describe('Sign-in and tokens', () => {
     [{ email: 'admin@tiermode.test' }, 'password must be a string'],
     [{ email: 'admin@tiermode.test', password: '' }, 'password must not be empty'],
     [{ email: 'admin@tiermode.test', password: 42 }, 'password must be a string'],
-    [{ email: 'admin@tiermode.test', password: DEMO_PASSWORD, role: 'admin' }, 'property role should not exist'],
+    [
+      { email: 'admin@tiermode.test', password: DEMO_PASSWORD, role: 'admin' },
+      'property role should not exist',
+    ],
   ])('refuses the login body %j with 400 naming the field', async (body, message) => {
     const res = await http().post('/api/auth/login').send(body).expect(400);
     expect(res.body.statusCode).toBe(400);
@@ -73,11 +76,18 @@ describe('Sign-in and tokens', () => {
 
   it('GET /api/auth/me returns the user and the CASL rules of its role', async () => {
     const token = await tokenFor(app, 'student');
-    const res = await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
+    const res = await http()
+      .get('/api/auth/me')
+      .set('Authorization', `Bearer ${token}`)
+      .expect(200);
     expect(res.body.user.email).toBe('student@tiermode.test');
     expect(res.body.rules).toEqual(
       expect.arrayContaining([
-        { action: 'read', subject: 'Calculation', conditions: { status: { $in: ['locked', 'superseded'] } } },
+        {
+          action: 'read',
+          subject: 'Calculation',
+          conditions: { status: { $in: ['locked', 'superseded'] } },
+        },
       ]),
     );
     expect(res.body.rules).not.toEqual(
@@ -100,7 +110,10 @@ describe('Sign-in and tokens', () => {
       ['a garbage token', () => 'not.a.jwt'],
       ['an expired token', () => forgeToken({ claims, expiresIn: -10 })],
       ['an unsigned token (alg none)', () => unsignedToken(claims)],
-      ['a token signed with another secret', () => forgeToken({ claims, secret: 'another-secret-of-sufficient-length-000000' })],
+      [
+        'a token signed with another secret',
+        () => forgeToken({ claims, secret: 'another-secret-of-sufficient-length-000000' }),
+      ],
       ['a token signed with another algorithm', () => forgeToken({ claims, algorithm: 'HS512' })],
       ['a token from another issuer', () => forgeToken({ claims, issuer: 'someone-else' })],
       ['a token for another audience', () => forgeToken({ claims, audience: 'another-app' })],
@@ -116,7 +129,10 @@ describe('Sign-in and tokens', () => {
     });
 
     it('a correctly forged control token is accepted, so the cases above fail for their flaw', async () => {
-      await http().get('/api/users').set('Authorization', `Bearer ${forgeToken({ claims })}`).expect(200);
+      await http()
+        .get('/api/users')
+        .set('Authorization', `Bearer ${forgeToken({ claims })}`)
+        .expect(200);
     });
   });
 

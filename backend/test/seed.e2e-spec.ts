@@ -53,7 +53,11 @@ describe('Migrations and seeding', () => {
         'DEMO=off on an empty database: set ADMIN_EMAIL and ADMIN_PASSWORD to create the first admin',
       );
       await expect(
-        prepareDatabase(orm, { demoMode: false, adminEmail: 'it@firm.test', adminPassword: 'password123' }),
+        prepareDatabase(orm, {
+          demoMode: false,
+          adminEmail: 'it@firm.test',
+          adminPassword: 'password123',
+        }),
       ).rejects.toThrow('ADMIN_PASSWORD is one of the most common passwords');
       const result = await prepareDatabase(orm, {
         demoMode: false,

@@ -43,7 +43,11 @@ describe('People and licences (/api/users)', () => {
         .send({ email: 'x@tiermode.test', name: 'X', role: 'admin', password: NEW_PASSWORD })
         .expect(403);
       const me = await http().get('/api/auth/me').set(auth).expect(200);
-      await http().patch(`/api/users/${me.body.user.id}`).set(auth).send({ role: 'admin' }).expect(403);
+      await http()
+        .patch(`/api/users/${me.body.user.id}`)
+        .set(auth)
+        .send({ role: 'admin' })
+        .expect(403);
     },
   );
 
@@ -59,7 +63,11 @@ describe('People and licences (/api/users)', () => {
         licenseExpiresOn: '2099-12-31',
       })
       .expect(201);
-    expect(res.body).toMatchObject({ email: 'new.reviewer@example.test', licensed: true, active: true });
+    expect(res.body).toMatchObject({
+      email: 'new.reviewer@example.test',
+      licensed: true,
+      active: true,
+    });
     expect(allKeys(res.body).some((k) => /password/i.test(k))).toBe(false);
     await signIn(app, 'new.reviewer@example.test', NEW_PASSWORD);
   });
@@ -89,7 +97,13 @@ describe('People and licences (/api/users)', () => {
     [{ licenseExpiresOn: '2030-02-30' }, 'licenseExpiresOn must be a date written YYYY-MM-DD'],
     [{ isAdmin: true }, 'property isAdmin should not exist'],
   ])('refuses a create body with %j, naming the field', async (change, message) => {
-    const body = { email: 'valid@example.test', name: 'Valid', role: 'designer', password: NEW_PASSWORD, ...change };
+    const body = {
+      email: 'valid@example.test',
+      name: 'Valid',
+      role: 'designer',
+      password: NEW_PASSWORD,
+      ...change,
+    };
     const res = await asAdmin(http().post('/api/users')).send(body).expect(400);
     expect(res.body.message).toContain(message);
     const list = await asAdmin(http().get('/api/users'));
@@ -98,14 +112,24 @@ describe('People and licences (/api/users)', () => {
 
   it('refuses a second account with the same email with 409', async () => {
     const res = await asAdmin(http().post('/api/users'))
-      .send({ email: 'DESIGNER@tiermode.test', name: 'Dup', role: 'designer', password: NEW_PASSWORD })
+      .send({
+        email: 'DESIGNER@tiermode.test',
+        name: 'Dup',
+        role: 'designer',
+        password: NEW_PASSWORD,
+      })
       .expect(409);
     expect(res.body.message).toEqual(['email is already used by another account']);
   });
 
   it('deactivates a user: the existing token stops working at once and sign-in fails', async () => {
     const created = await asAdmin(http().post('/api/users'))
-      .send({ email: 'leaver@example.test', name: 'Leaver', role: 'designer', password: NEW_PASSWORD })
+      .send({
+        email: 'leaver@example.test',
+        name: 'Leaver',
+        role: 'designer',
+        password: NEW_PASSWORD,
+      })
       .expect(201);
     const token = await signIn(app, 'leaver@example.test', NEW_PASSWORD);
     await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
@@ -131,7 +155,9 @@ describe('People and licences (/api/users)', () => {
       .expect(409);
     expect(stale.body.message[0]).toMatch(/changed by someone else/);
     const after = await asAdmin(http().get('/api/users'));
-    expect(after.body.find((u: { id: string }) => u.id === student.id).name).toBe('Jun Okafor-Reyes');
+    expect(after.body.find((u: { id: string }) => u.id === student.id).name).toBe(
+      'Jun Okafor-Reyes',
+    );
   });
 
   it('does not let an admin deactivate or demote itself', async () => {
@@ -142,12 +168,18 @@ describe('People and licences (/api/users)', () => {
     expect(deactivate.body.message).toEqual([
       'You cannot deactivate your own account or change your own role',
     ]);
-    await asAdmin(http().patch(`/api/users/${me.body.user.id}`)).send({ role: 'student' }).expect(403);
-    await asAdmin(http().patch(`/api/users/${me.body.user.id}`)).send({ name: 'Rowan Pike' }).expect(200);
+    await asAdmin(http().patch(`/api/users/${me.body.user.id}`))
+      .send({ role: 'student' })
+      .expect(403);
+    await asAdmin(http().patch(`/api/users/${me.body.user.id}`))
+      .send({ name: 'Rowan Pike' })
+      .expect(200);
   });
 
   it('answers a malformed id with 400 and an unknown one with 404', async () => {
-    const bad = await asAdmin(http().patch('/api/users/not-a-uuid')).send({ name: 'X' }).expect(400);
+    const bad = await asAdmin(http().patch('/api/users/not-a-uuid'))
+      .send({ name: 'X' })
+      .expect(400);
     expect(bad.body.message).toEqual(['id must be a UUID']);
     await asAdmin(http().patch('/api/users/6f1c1f3e-8f43-4a55-9d4e-1b2c3d4e5f60'))
       .send({ name: 'X' })
@@ -158,7 +190,9 @@ describe('People and licences (/api/users)', () => {
     const token = await tokenFor(app, 'designer');
     const list = await asAdmin(http().get('/api/users'));
     const designer = list.body.find((u: { email: string }) => u.email === 'designer@tiermode.test');
-    await asAdmin(http().patch(`/api/users/${designer.id}`)).send({ password: NEW_PASSWORD }).expect(200);
+    await asAdmin(http().patch(`/api/users/${designer.id}`))
+      .send({ password: NEW_PASSWORD })
+      .expect(200);
     await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(401);
     await signIn(app, 'designer@tiermode.test', NEW_PASSWORD);
   });

@@ -13,7 +13,10 @@ describe('People (admin)', () => {
   it('the admin adds a licensed reviewer, sees the server refuse a common password, and the new reviewer signs in', async () => {
     const { context, page } = await newPage(browser);
     await signIn(page, 'admin');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'People' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'People' })
+      .click();
     await page.getByRole('heading', { name: 'People' }).waitFor();
     await page.getByRole('grid', { name: 'People' }).getByText('Tomas Hale').waitFor();
     await screenshot(page, 'people-list');
@@ -56,7 +59,9 @@ describe('People (admin)', () => {
     await second.page.getByLabel('Password').fill('basalt-lintel-2031');
     await second.page.getByRole('button', { name: 'Sign in' }).click();
     await second.page.getByRole('heading', { name: 'Welcome, Ines Varga' }).waitFor();
-    expect(await second.page.getByTestId('signed-in-user').textContent()).toContain('Reviewer (licensed)');
+    expect(await second.page.getByTestId('signed-in-user').textContent()).toContain(
+      'Reviewer (licensed)',
+    );
     await second.context.close();
   });
 });

@@ -28,9 +28,9 @@ describe('Signing in', () => {
     async (role) => {
       const { context, page } = await newPage(browser);
       await signIn(page, role);
-      await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(
-        `Welcome, ${NAMES[role]}`,
-      );
+      await expect
+        .poll(() => page.getByRole('heading', { level: 1 }).textContent())
+        .toBe(`Welcome, ${NAMES[role]}`);
       const nav = page.getByRole('navigation', { name: 'Main' });
       expect(await nav.getByRole('link').allTextContents()).toEqual(NAVIGATION[role]);
       expect(await page.getByTestId('signed-in-user').textContent()).toContain(NAMES[role]);

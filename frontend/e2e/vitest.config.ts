@@ -3,7 +3,7 @@ import { defineConfig } from 'vitest/config';
 /** Browser journeys: the built app served by the built backend, driven in Debian's chromium. */
 export default defineConfig({
   test: {
-    root: __dirname,
+    root: import.meta.dirname,
     include: ['**/*.e2e.ts'],
     environment: 'node',
     globalSetup: ['./support/global-setup.ts'],

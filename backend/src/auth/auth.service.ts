@@ -1,7 +1,7 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import type { AbilityRule, LoginResponse, MeResponse } from '@tiermode/shared-types';
+import type { LoginResponse, MeResponse } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { hashPassword, verifyPassword } from '../users/password-hasher';
 import { User } from '../users/user.entity';
@@ -39,7 +39,7 @@ export class AuthService {
   }
 
   me(user: User, ability: AppAbility): MeResponse {
-    return { user: toUserDto(user), rules: ability.rules as AbilityRule[] };
+    return { user: toUserDto(user), rules: ability.rules };
   }
 
   /** Signing out ends every session of the user: tokens issued before no longer work. */

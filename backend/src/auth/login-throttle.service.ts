@@ -39,6 +39,8 @@ export class LoginThrottleService {
   }
 
   private tooMany(): ThrottlerException {
-    return new ThrottlerException('Too many failed sign-ins from here; wait a minute and try again');
+    return new ThrottlerException(
+      'Too many failed sign-ins from here; wait a minute and try again',
+    );
   }
 }

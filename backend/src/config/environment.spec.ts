@@ -26,8 +26,15 @@ describe('loadEnvironment', () => {
 
   it('names every bad variable', () => {
     expect(() =>
-      loadEnvironment({ PORT: '70000', JWT_SECRET: 'short', DEMO: 'maybe', DATABASE_PATH: databasePath }),
-    ).toThrow(/PORT must not be greater than 65535[\s\S]*JWT_SECRET must be at least 32[\s\S]*DEMO must be "on" or "off"/);
+      loadEnvironment({
+        PORT: '70000',
+        JWT_SECRET: 'short',
+        DEMO: 'maybe',
+        DATABASE_PATH: databasePath,
+      }),
+    ).toThrow(
+      /PORT must not be greater than 65535[\s\S]*JWT_SECRET must be at least 32[\s\S]*DEMO must be "on" or "off"/,
+    );
     expect(() => loadEnvironment({ PORT: 'abc', DATABASE_PATH: databasePath })).toThrow(/PORT/);
   });
 

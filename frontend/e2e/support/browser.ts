@@ -3,7 +3,7 @@ import { join, resolve } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
 
-export const SCREENSHOTS = resolve(__dirname, '..', 'screenshots');
+export const SCREENSHOTS = resolve(import.meta.dirname, '..', 'screenshots');
 export const DEMO_PASSWORD = 'tiermode-demo';
 export type DemoRole = 'admin' | 'designer' | 'reviewer' | 'student';
 

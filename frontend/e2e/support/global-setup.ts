@@ -11,7 +11,7 @@ declare module 'vitest' {
   }
 }
 
-const repo = resolve(__dirname, '..', '..', '..');
+const repo = resolve(import.meta.dirname, '..', '..', '..');
 
 function freePort(): Promise<number> {
   return new Promise((done, fail) => {
@@ -24,7 +24,11 @@ function freePort(): Promise<number> {
   });
 }
 
-async function waitForHealth(url: string, server: ChildProcess, output: () => string): Promise<void> {
+async function waitForHealth(
+  url: string,
+  server: ChildProcess,
+  output: () => string,
+): Promise<void> {
   const deadline = Date.now() + 30_000;
   while (Date.now() < deadline) {
     if (server.exitCode !== null) throw new Error(`The server exited early:\n${output()}`);

@@ -7,6 +7,8 @@ const labels = (rules: Parameters<typeof buildAbility>[0]) =>
 describe('navigationFor', () => {
   it('shows People only to those who may manage users', () => {
     expect(labels([{ action: 'manage', subject: 'User' }])).toEqual(['Start', 'People']);
-    expect(labels([{ action: 'read', subject: 'User', conditions: { id: 'me' } }])).toEqual(['Start']);
+    expect(labels([{ action: 'read', subject: 'User', conditions: { id: 'me' } }])).toEqual([
+      'Start',
+    ]);
   });
 });

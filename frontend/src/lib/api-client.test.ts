@@ -32,7 +32,9 @@ describe('api client', () => {
     writeSession({ accessToken: 'token-123', expiresAt: future() });
     const handler = vi.fn();
     const stop = onUnauthorized(handler);
-    await expect(api.get('/users', { adapter: answer(401, { message: ['ended'] }) })).rejects.toThrow();
+    await expect(
+      api.get('/users', { adapter: answer(401, { message: ['ended'] }) }),
+    ).rejects.toThrow();
     expect(handler).toHaveBeenCalledTimes(1);
     expect(readSession()).toBeNull();
     stop();
@@ -42,7 +44,11 @@ describe('api client', () => {
     const handler = vi.fn();
     const stop = onUnauthorized(handler);
     await expect(
-      api.post('/auth/login', {}, { adapter: answer(401, { message: ['Email or password is incorrect'] }, '/auth/login') }),
+      api.post(
+        '/auth/login',
+        {},
+        { adapter: answer(401, { message: ['Email or password is incorrect'] }, '/auth/login') },
+      ),
     ).rejects.toThrow();
     expect(handler).not.toHaveBeenCalled();
     stop();

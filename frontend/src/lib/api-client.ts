@@ -27,7 +27,7 @@ api.interceptors.response.use(undefined, (error: unknown) => {
     clearSession();
     unauthorizedHandler?.();
   }
-  return Promise.reject(error);
+  return Promise.reject(error instanceof Error ? error : new Error(String(error)));
 });
 
 /** The server's messages for a failed request, ready to show; never an empty list. */
@@ -37,7 +37,8 @@ export function errorMessages(error: unknown): string[] {
     const message = body?.message;
     if (Array.isArray(message) && message.length > 0) return message.map(String);
     if (typeof message === 'string' && message) return [message];
-    if (!error.response) return ['The server could not be reached. Check your connection and try again.'];
+    if (!error.response)
+      return ['The server could not be reached. Check your connection and try again.'];
     return [`The server answered ${error.response.status}. Try again, or tell your admin.`];
   }
   return [error instanceof Error ? error.message : 'Something went wrong'];

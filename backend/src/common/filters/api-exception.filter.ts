@@ -54,14 +54,19 @@ export class ApiExceptionFilter implements ExceptionFilter {
       };
     }
     if (exception instanceof UniqueConstraintViolationException) {
-      return { statusCode: HttpStatus.CONFLICT, message: 'A record with these values already exists' };
+      return {
+        statusCode: HttpStatus.CONFLICT,
+        message: 'A record with these values already exists',
+      };
     }
     if (exception instanceof NotFoundError) {
       return { statusCode: HttpStatus.NOT_FOUND, message: 'Not found' };
     }
     const clientError = asClientHttpError(exception);
     if (clientError) return clientError;
-    this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    this.logger.error(
+      exception instanceof Error ? (exception.stack ?? exception.message) : String(exception),
+    );
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
   }
 }
@@ -72,7 +77,11 @@ export class ApiExceptionFilter implements ExceptionFilter {
  */
 function asClientHttpError(exception: unknown): { statusCode: number; message: string } | null {
   if (typeof exception !== 'object' || exception === null) return null;
-  const { status, expose, type } = exception as { status?: unknown; expose?: unknown; type?: unknown };
+  const { status, expose, type } = exception as {
+    status?: unknown;
+    expose?: unknown;
+    type?: unknown;
+  };
   if (typeof status !== 'number' || status < 400 || status > 499 || expose !== true) return null;
   const messages: Record<string, string> = {
     'entity.too.large': 'The request body is too large',

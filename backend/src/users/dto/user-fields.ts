@@ -24,7 +24,9 @@ export const EmailField = () =>
 
 export const NameField = () =>
   applyDecorators(
-    Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value)),
+    Transform(({ value }: { value: unknown }) =>
+      typeof value === 'string' ? value.trim() : value,
+    ),
     IsString({ message: 'name must be a string' }),
     IsNotEmpty({ message: 'name must not be empty' }),
     MaxLength(200, { message: 'name must be at most 200 characters' }),

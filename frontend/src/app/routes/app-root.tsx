@@ -21,7 +21,7 @@ export function AppRoot() {
   const ability = useMemo(() => buildAbility(me.data?.rules ?? []), [me.data]);
 
   useEffect(
-    () => onUnauthorized(() => navigate('/sign-in?ended=1', { replace: true })),
+    () => onUnauthorized(() => void navigate('/sign-in?ended=1', { replace: true })),
     [navigate],
   );
 
@@ -45,7 +45,7 @@ export function AppRoot() {
         entries={navigationFor(ability)}
         userName={user.name}
         roleLabel={ROLE_LABELS[user.role] + (user.licensed ? ' (licensed)' : '')}
-        onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate('/sign-in') })}
+        onSignOut={() => logout.mutate(undefined, { onSettled: () => void navigate('/sign-in') })}
       >
         <Outlet />
       </AppShell>

@@ -18,7 +18,13 @@ export function SignInRoute() {
 
   return (
     <Box
-      sx={{ minHeight: '100vh', display: 'grid', placeItems: 'center', bgcolor: 'background.default', p: 2 }}
+      sx={{
+        minHeight: '100vh',
+        display: 'grid',
+        placeItems: 'center',
+        bgcolor: 'background.default',
+        p: 2,
+      }}
     >
       <Card sx={{ width: '100%', maxWidth: 420 }} variant="outlined">
         <CardContent sx={{ p: 4 }}>
@@ -33,7 +39,7 @@ export function SignInRoute() {
               Your session has ended. Please sign in again.
             </Typography>
           )}
-          <SignInForm onSignedIn={() => navigate(redirectTo, { replace: true })} />
+          <SignInForm onSignedIn={() => void navigate(redirectTo, { replace: true })} />
         </CardContent>
       </Card>
     </Box>

@@ -6,7 +6,11 @@ import { errorMessages } from '@/lib/api-client';
 import { useLogin } from '../api/login';
 
 const schema = yup.object({
-  email: yup.string().trim().email('Enter a valid email address').required('Enter your email address'),
+  email: yup
+    .string()
+    .trim()
+    .email('Enter a valid email address')
+    .required('Enter your email address'),
   password: yup.string().required('Enter your password'),
 });
 

@@ -59,7 +59,9 @@ export function UserFormDialog({ user, onClose }: UserFormDialogProps) {
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="user-dialog-title">
       <form noValidate onSubmit={formik.handleSubmit}>
-        <DialogTitle id="user-dialog-title">{user ? `Edit ${user.name}` : 'Add a person'}</DialogTitle>
+        <DialogTitle id="user-dialog-title">
+          {user ? `Edit ${user.name}` : 'Add a person'}
+        </DialogTitle>
         <DialogContent>
           <Stack spacing={2} sx={{ mt: 1 }}>
             {saving.isError && (

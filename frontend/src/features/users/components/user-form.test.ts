@@ -21,7 +21,9 @@ describe('user form', () => {
     const schema = userFormSchema(true);
     const values = { ...initialValues(), email: 'a@b.test', name: 'A', password: 'short' };
     await expect(schema.validate(values)).rejects.toThrow('Use at least 10 characters');
-    await expect(schema.validate({ ...values, password: '' })).rejects.toThrow('Enter a first password');
+    await expect(schema.validate({ ...values, password: '' })).rejects.toThrow(
+      'Enter a first password',
+    );
   });
 
   it('lets an edit leave the password blank', async () => {
@@ -34,13 +36,29 @@ describe('user form', () => {
   });
 
   it('sends licence fields only for reviewers', () => {
-    const values = { ...initialValues(), email: ' a@b.test ', name: 'A', role: 'designer' as const, password: 'long-enough-1', licenseNumber: 'X' };
-    expect(toCreateRequest(values)).toEqual({ email: 'a@b.test', name: 'A', role: 'designer', password: 'long-enough-1' });
+    const values = {
+      ...initialValues(),
+      email: ' a@b.test ',
+      name: 'A',
+      role: 'designer' as const,
+      password: 'long-enough-1',
+      licenseNumber: 'X',
+    };
+    expect(toCreateRequest(values)).toEqual({
+      email: 'a@b.test',
+      name: 'A',
+      role: 'designer',
+      password: 'long-enough-1',
+    });
   });
 
   it('sends only the changed fields and the version read', () => {
     const values = { ...initialValues(reviewer), name: 'R. Hale', licenseExpiresOn: '2031-06-30' };
-    expect(toUpdateRequest(reviewer, values)).toEqual({ version: 3, name: 'R. Hale', licenseExpiresOn: '2031-06-30' });
+    expect(toUpdateRequest(reviewer, values)).toEqual({
+      version: 3,
+      name: 'R. Hale',
+      licenseExpiresOn: '2031-06-30',
+    });
   });
 
   it('clears the licence when a reviewer becomes a designer', () => {

@@ -50,16 +50,24 @@ const passwordRule = yup
 /** The same rules the server applies; the server also refuses common passwords. */
 export function userFormSchema(isNew: boolean) {
   return yup.object({
-    email: yup.string().trim().email('Enter a valid email address').required('Enter an email address'),
+    email: yup
+      .string()
+      .trim()
+      .email('Enter a valid email address')
+      .required('Enter an email address'),
     name: yup.string().trim().max(200, 'Use at most 200 characters').required('Enter a name'),
-    role: yup.mixed<Role>().oneOf([...ROLES], 'Choose a role').required('Choose a role'),
+    role: yup
+      .mixed<Role>()
+      .oneOf([...ROLES], 'Choose a role')
+      .required('Choose a role'),
     password: isNew ? passwordRule.required('Enter a first password') : passwordRule,
     active: yup.boolean().required(),
     licenseNumber: yup.string().max(100, 'Use at most 100 characters'),
     licenseJurisdiction: yup.string().max(100, 'Use at most 100 characters'),
-    licenseExpiresOn: yup
-      .string()
-      .matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Write the date as YYYY-MM-DD', excludeEmptyString: true }),
+    licenseExpiresOn: yup.string().matches(/^\d{4}-\d{2}-\d{2}$/, {
+      message: 'Write the date as YYYY-MM-DD',
+      excludeEmptyString: true,
+    }),
   });
 }
 
@@ -87,7 +95,13 @@ export function toCreateRequest(values: UserFormValues): CreateUserRequest {
 
 /** Only what changed, with the version the form was read at, so a stale edit is refused. */
 export function toUpdateRequest(user: UserDto, values: UserFormValues): UpdateUserRequest {
-  const next = { email: values.email.trim(), name: values.name.trim(), role: values.role, active: values.active, ...licenceOf(values) };
+  const next = {
+    email: values.email.trim(),
+    name: values.name.trim(),
+    role: values.role,
+    active: values.active,
+    ...licenceOf(values),
+  };
   const body: UpdateUserRequest = { version: user.version };
   (Object.keys(next) as (keyof typeof next)[]).forEach((key) => {
     if (next[key] !== user[key]) Object.assign(body, { [key]: next[key] });

@@ -15,22 +15,27 @@ export function UsersPage() {
   const [dialog, setDialog] = useState<DialogState>({ mode: 'closed' });
 
   const columns: GridColDef<UserDto>[] = [
-    { field: 'name', headerName: 'Name', flex: 1, minWidth: 160 },
-    { field: 'email', headerName: 'Email', flex: 1, minWidth: 200 },
-    { field: 'role', headerName: 'Role', width: 110, valueFormatter: (v: UserDto['role']) => ROLE_LABELS[v] },
+    { field: 'name', headerName: 'Name', flex: 1, minWidth: 140 },
+    { field: 'email', headerName: 'Email', flex: 1.2, minWidth: 180 },
+    {
+      field: 'role',
+      headerName: 'Role',
+      width: 100,
+      valueFormatter: (v: UserDto['role']) => ROLE_LABELS[v],
+    },
     {
       field: 'active',
       headerName: 'Status',
-      width: 120,
+      width: 110,
       valueFormatter: (v: boolean) => (v ? 'Active' : 'Deactivated'),
     },
-    { field: 'licenseNumber', headerName: 'Licence number', width: 150 },
-    { field: 'licenseJurisdiction', headerName: 'Jurisdiction', flex: 1, minWidth: 150 },
-    { field: 'licenseExpiresOn', headerName: 'Valid through', width: 120 },
+    { field: 'licenseNumber', headerName: 'Licence number', width: 140 },
+    { field: 'licenseJurisdiction', headerName: 'Jurisdiction', flex: 1, minWidth: 140 },
+    { field: 'licenseExpiresOn', headerName: 'Valid through', width: 115 },
     {
       field: 'licensed',
       headerName: 'Licensed',
-      width: 100,
+      width: 90,
       valueFormatter: (v: boolean) => (v ? 'Yes' : 'No'),
     },
     {
@@ -53,7 +58,11 @@ export function UsersPage() {
     <Stack spacing={2}>
       <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between' }}>
         <Typography variant="h1">People</Typography>
-        <Button variant="contained" startIcon={<PersonAddIcon />} onClick={() => setDialog({ mode: 'add' })}>
+        <Button
+          variant="contained"
+          startIcon={<PersonAddIcon />}
+          onClick={() => setDialog({ mode: 'add' })}
+        >
           Add a person
         </Button>
       </Stack>
