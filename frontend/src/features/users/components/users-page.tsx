@@ -4,6 +4,8 @@ import { Alert, Box, Button, Stack, Typography } from '@mui/material';
 import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid';
 import { ROLE_LABELS, type UserDto } from '@tiermode/shared-types';
 import { useState } from 'react';
+import { Can } from '@casl/react';
+import type { AppAbility } from '@/lib/ability';
 import { errorMessages } from '@/lib/api-client';
 import { useUsers } from '../api/get-users';
 import { UserFormDialog } from './user-form-dialog';
@@ -58,13 +60,15 @@ export function UsersPage() {
     <Stack spacing={2}>
       <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between' }}>
         <Typography variant="h1">People</Typography>
-        <Button
-          variant="contained"
-          startIcon={<PersonAddIcon />}
-          onClick={() => setDialog({ mode: 'add' })}
-        >
-          Add a person
-        </Button>
+        <Can<AppAbility> I="create" a="User">
+          <Button
+            variant="contained"
+            startIcon={<PersonAddIcon />}
+            onClick={() => setDialog({ mode: 'add' })}
+          >
+            Add a person
+          </Button>
+        </Can>
       </Stack>
       <Typography color="text.secondary">
         People are deactivated, never deleted, so the record of who did what stays whole. A reviewer
