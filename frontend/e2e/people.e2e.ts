@@ -11,7 +11,7 @@ describe('People (admin)', () => {
   afterAll(() => browser?.close());
 
   it('the admin adds a licensed reviewer, sees the server refuse a common password, and the new reviewer signs in', async () => {
-    const { context, page } = await newPage(browser);
+    const { page, close } = await newPage(browser);
     await signIn(page, 'admin');
     await page
       .getByRole('navigation', { name: 'Main' })
@@ -51,7 +51,7 @@ describe('People (admin)', () => {
     // A reload on a client-side route serves the app.
     await page.reload();
     await page.getByRole('row', { name: /Ines Varga/ }).waitFor();
-    await context.close();
+    await close();
 
     const second = await newPage(browser);
     await second.page.goto('/sign-in');
@@ -62,6 +62,6 @@ describe('People (admin)', () => {
     expect(await second.page.getByTestId('signed-in-user').textContent()).toContain(
       'Reviewer (licensed)',
     );
-    await second.context.close();
+    await second.close();
   });
 });

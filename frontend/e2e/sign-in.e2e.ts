@@ -26,7 +26,7 @@ describe('Signing in', () => {
   it.each(Object.keys(NAVIGATION) as DemoRole[])(
     'the %s signs in and sees the navigation its role allows',
     async (role) => {
-      const { context, page } = await newPage(browser);
+      const { page, close } = await newPage(browser);
       await signIn(page, role);
       await expect
         .poll(() => page.getByRole('heading', { level: 1 }).textContent())
@@ -41,12 +41,12 @@ describe('Signing in', () => {
         expect(await page.getByText('You may lock calcs you did not author').count()).toBe(1);
       }
       await screenshot(page, `sign-in-${role}`);
-      await context.close();
+      await close();
     },
   );
 
   it('a wrong password shows a clear error and stays on the sign-in page', async () => {
-    const { context, page } = await newPage(browser);
+    const { page, close } = await newPage(browser);
     await signIn(page, 'designer', 'not-the-password');
     const alert = page.getByRole('alert');
     await alert.waitFor();
@@ -54,11 +54,11 @@ describe('Signing in', () => {
     expect(new URL(page.url()).pathname).toBe('/sign-in');
     expect(await page.getByLabel('Email').inputValue()).toBe('designer@tiermode.test');
     await screenshot(page, 'sign-in-wrong-password');
-    await context.close();
+    await close();
   });
 
   it('a signed-out visitor is sent to sign-in and comes back to the page asked for', async () => {
-    const { context, page } = await newPage(browser);
+    const { page, close } = await newPage(browser);
     await page.goto('/users');
     await page.waitForURL(/\/sign-in\?redirectTo=%2Fusers/);
     await page.getByLabel('Email').fill('admin@tiermode.test');
@@ -66,26 +66,26 @@ describe('Signing in', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'People' }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/users');
-    await context.close();
+    await close();
   });
 
   it('a student who types the admin address of a page sees that it is not for its role', async () => {
-    const { context, page } = await newPage(browser);
+    const { page, close } = await newPage(browser);
     await signIn(page, 'student');
     await page.getByRole('heading', { name: 'Welcome, Jun Okafor' }).waitFor();
     await page.goto('/users');
     await page.getByRole('heading', { name: 'Not available to your role' }).waitFor();
-    await context.close();
+    await close();
   });
 
   it('signing out returns to the sign-in page and the old session no longer opens pages', async () => {
-    const { context, page } = await newPage(browser);
+    const { page, close } = await newPage(browser);
     await signIn(page, 'designer');
     await page.getByRole('heading', { name: 'Welcome, Mira Castell' }).waitFor();
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/sign-in/);
     await page.goto('/');
     await page.waitForURL(/\/sign-in/);
-    await context.close();
+    await close();
   });
 });

@@ -1,7 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
-import { inject } from 'vitest';
+import { expect, inject } from 'vitest';
 
 export const SCREENSHOTS = resolve(import.meta.dirname, '..', 'screenshots');
 export const DEMO_PASSWORD = 'tiermode-demo';
@@ -27,13 +27,32 @@ export async function launchBrowser(): Promise<Browser> {
   });
 }
 
-export async function newPage(browser: Browser): Promise<{ context: BrowserContext; page: Page }> {
+/**
+ * A fresh context and page. `close()` fails the test if the page threw an uncaught error or
+ * logged a console error meanwhile (a render loop, a failed script), so no journey passes over one.
+ */
+export async function newPage(
+  browser: Browser,
+): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
   const context = await browser.newContext({
     baseURL: inject('baseURL'),
     viewport: { width: 1366, height: 860 },
   });
   const page = await context.newPage();
-  return { context, page };
+  const problems: string[] = [];
+  page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
+  page.on('console', (message) => {
+    // A refused request (401 for a wrong password, 400 for a refused form) is logged by the
+    // browser itself; those are expected answers, not script errors.
+    if (message.type() === 'error' && !message.text().startsWith('Failed to load resource')) {
+      problems.push(`console error: ${message.text()}`);
+    }
+  });
+  const close = async () => {
+    await context.close();
+    expect(problems).toEqual([]);
+  };
+  return { context, page, close };
 }
 
 export async function signIn(page: Page, role: DemoRole, password = DEMO_PASSWORD): Promise<void> {
