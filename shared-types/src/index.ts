@@ -3,3 +3,4 @@ export * from './abilities';
 export * from './users';
 export * from './auth';
 export * from './http';
+export * from './analysis';

@@ -1,0 +1,129 @@
+import type {
+  AnalysisRequest,
+  AnalysisResponse,
+  CombinedResponse,
+  ModalResponse,
+  ModeResult,
+} from '@tiermode/shared-types';
+import { combineAbs, combineCqc, combineSrss, correlationMatrix } from './combination';
+import { modalResponse } from './modal-response';
+import { selectModeCount } from './mode-selection';
+import { naturalModes } from './modes';
+import { assertStoreys } from './shear-building';
+import { assertSpectrum, spectralAcceleration } from './spectrum';
+
+/** Bumped whenever a change to the engine could change a number it returns. */
+export const ENGINE_VERSION = '1.0.0';
+
+/** EN 1998-1 4.3.3.3.1 asks the modes used to reach 90% of the mass. */
+export const MIN_CUMULATIVE_MASS_RATIO = 0.9;
+/** EN 1998-1 4.3.3.3.2: modes i and j are independent when T_j <= 0.9 T_i. */
+export const CLOSE_MODE_PERIOD_RATIO = 0.9;
+
+/**
+ * The whole modal response spectrum analysis of a shear building: modes, spectral values,
+ * modal maxima, and their SRSS, CQC and ABS combinations (method.md). Pure: the input is not
+ * changed. Throws TypeError/RangeError naming the field when the input is not valid.
+ */
+export function analyse(request: AnalysisRequest): AnalysisResponse {
+  const { storeys, spectrum, dampingRatio } = request;
+  assertStoreys(storeys);
+  assertSpectrum(spectrum?.points);
+  if (typeof dampingRatio !== 'number' || !(dampingRatio > 0 && dampingRatio < 1)) {
+    throw new RangeError('dampingRatio must be greater than 0 and less than 1');
+  }
+  const interpolation = spectrum.interpolation ?? 'linear';
+  if (interpolation !== 'linear' && interpolation !== 'log-log') {
+    throw new RangeError('spectrum.interpolation must be "linear" or "log-log"');
+  }
+
+  const allModes = naturalModes(storeys);
+  const used = allModes.slice(
+    0,
+    selectModeCount(allModes, {
+      modeCount: request.modeCount,
+      targetMassRatio: request.targetMassRatio,
+    }),
+  );
+  const warnings: string[] = [];
+  const modes: ModeResult[] = used.map((mode) => {
+    const { sa, warning } = spectralAcceleration(spectrum.points, mode.period, interpolation);
+    if (warning) warnings.push(`Mode ${mode.number}: ${warning}.`);
+    return {
+      number: mode.number,
+      period: mode.period,
+      frequency: mode.frequency,
+      circularFrequency: mode.circularFrequency,
+      shape: mode.shape,
+      participationFactor: mode.participationFactor,
+      effectiveMass: mode.effectiveMass,
+      effectiveMassRatio: mode.effectiveMassRatio,
+      cumulativeMassRatio: mode.cumulativeMassRatio,
+      sa,
+      response: modalResponse(storeys, mode, sa),
+    };
+  });
+
+  const reached = used[used.length - 1].cumulativeMassRatio;
+  if (reached < MIN_CUMULATIVE_MASS_RATIO) {
+    warnings.push(
+      `The ${used.length} mode(s) used reach ${(reached * 100).toFixed(1)}% of the total mass; ` +
+        'EN 1998-1 4.3.3.3.1 asks for at least 90% (ASCE 7 12.9.1.1 asks for 100%, or a residual mode).',
+    );
+  }
+  for (let i = 1; i < used.length; i += 1) {
+    const ratio = used[i].period / used[i - 1].period;
+    if (ratio > CLOSE_MODE_PERIOD_RATIO) {
+      warnings.push(
+        `Modes ${i} and ${i + 1} are closely spaced (T${i + 1}/T${i} = ${ratio.toFixed(3)} > 0.9, ` +
+          'EN 1998-1 4.3.3.3.2): SRSS is not acceptable for them; use CQC.',
+      );
+    }
+  }
+
+  const correlation = correlationMatrix(
+    used.map((m) => m.circularFrequency),
+    dampingRatio,
+  );
+  const rows = modes.map((m) => flatten(m.response));
+  const n = storeys.length;
+  const unflatten = (values: number[]): CombinedResponse => {
+    const drift = values.slice(n, 2 * n);
+    return {
+      displacement: values.slice(0, n),
+      drift,
+      driftRatio: drift.map((d, i) => d / storeys[i].height),
+      floorForce: values.slice(2 * n, 3 * n),
+      storeyShear: values.slice(3 * n, 4 * n),
+      overturningMoment: values.slice(4 * n, 5 * n),
+      baseShear: values[5 * n],
+      baseMoment: values[5 * n + 1],
+    };
+  };
+  const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
+  return {
+    totalMass,
+    modes,
+    availableModes: allModes.length,
+    combined: {
+      srss: unflatten(combineSrss(rows)),
+      cqc: unflatten(combineCqc(rows, correlation)),
+      abs: unflatten(combineAbs(rows)),
+    },
+    correlation,
+    warnings,
+    engineVersion: ENGINE_VERSION,
+  };
+}
+
+/** One row per mode with every quantity side by side, so each is combined on its own in one pass. */
+function flatten(r: ModalResponse): Float64Array {
+  const n = r.displacement.length;
+  const row = new Float64Array(5 * n + 2);
+  [r.displacement, r.drift, r.floorForce, r.storeyShear, r.overturningMoment].forEach(
+    (quantity, q) => row.set(quantity, q * n),
+  );
+  row[5 * n] = r.baseShear;
+  row[5 * n + 1] = r.overturningMoment[0];
+  return row;
+}

@@ -1,0 +1,83 @@
+import { assertStoreys, stiffnessTridiagonal, type Storey } from './shear-building';
+import { symmetricTridiagonalEigen } from './symmetric-tridiagonal';
+
+/** One natural mode of the shear building. */
+export interface Mode {
+  /** 1 = the fundamental (longest period). */
+  number: number;
+  /** omega, rad/s */
+  circularFrequency: number;
+  /** f = omega / (2 pi), Hz */
+  frequency: number;
+  /** T = 2 pi / omega, s */
+  period: number;
+  /** Normalised to +1 at the roof (index N-1). */
+  shape: number[];
+  /** Normalised so that phi^T M phi = 1 (same sign as `shape`). */
+  massNormalisedShape: number[];
+  /** Gamma = phi^T M r / phi^T M phi for the roof-normalised shape, r = ones. */
+  participationFactor: number;
+  /** M* = (phi^T M r)^2 / (phi^T M phi), kg; independent of the normalisation. */
+  effectiveMass: number;
+  /** M* / total mass */
+  effectiveMassRatio: number;
+  /** Sum of the effective mass ratios of this mode and all below it. */
+  cumulativeMassRatio: number;
+}
+
+/**
+ * All N natural modes of the shear building, fundamental first.
+ *
+ * Solves K phi = omega^2 M phi through the symmetric standard form A = M^-1/2 K M^-1/2 (A is
+ * tridiagonal because K is and M is diagonal): A x = omega^2 x, phi = M^-1/2 x, so the unit x
+ * gives the mass-normalised phi. Gamma and M* as in Chopra, Dynamics of Structures, chapter 13
+ * (earthquake analysis of linear systems): Gamma_n = L_n / M_n with L_n = phi_n^T M r and
+ * M_n = phi_n^T M phi_n, M*_n = L_n^2 / M_n.
+ */
+export function naturalModes(storeys: readonly Storey[]): Mode[] {
+  assertStoreys(storeys);
+  const n = storeys.length;
+  const { diagonal, offDiagonal } = stiffnessTridiagonal(storeys);
+  const rootMass = storeys.map((s) => Math.sqrt(s.mass));
+  const a = diagonal.map((k, i) => k / storeys[i].mass);
+  const b = offDiagonal.map((k, i) => k / (rootMass[i] * rootMass[i + 1]));
+  const { values, vectors } = symmetricTridiagonalEigen(a, b);
+  const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
+
+  let cumulative = 0;
+  return values.map((omegaSquared, j) => {
+    if (!(omegaSquared > 0) || !Number.isFinite(omegaSquared)) {
+      throw new RangeError(
+        'the storey masses and stiffnesses are too far apart in size to analyse in double precision',
+      );
+    }
+    const x = vectors[j];
+    // The roof component of an eigenvector of an unreduced tridiagonal matrix is never zero.
+    const sign = x[n - 1] < 0 ? -1 : 1;
+    const massNormalisedShape = x.map((xi, i) => (sign * xi) / rootMass[i]);
+    const roof = massNormalisedShape[n - 1];
+    const shape = massNormalisedShape.map((p) => p / roof);
+    let l = 0; // phi^T M r
+    let mn = 0; // phi^T M phi
+    shape.forEach((p, i) => {
+      l += storeys[i].mass * p;
+      mn += storeys[i].mass * p * p;
+    });
+    const effectiveMass = (l * l) / mn;
+    const effectiveMassRatio = effectiveMass / totalMass;
+    cumulative += effectiveMassRatio;
+    const circularFrequency = Math.sqrt(omegaSquared);
+    return {
+      number: j + 1,
+      circularFrequency,
+      frequency: circularFrequency / (2 * Math.PI),
+      period: (2 * Math.PI) / circularFrequency,
+      shape,
+      massNormalisedShape,
+      participationFactor: l / mn,
+      effectiveMass,
+      effectiveMassRatio,
+      cumulativeMassRatio: cumulative,
+    };
+  });
+}

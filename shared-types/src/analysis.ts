@@ -1,0 +1,108 @@
+/**
+ * `POST /api/analysis` (any signed-in user). SI base units throughout: kg, N/m, m, s, N, N*m;
+ * spectral accelerations in g. Arrays are per storey; index 0 = storey 1 / level 1 (at the base).
+ */
+export interface StoreyInput {
+  /** kg */
+  mass: number;
+  /** N/m */
+  stiffness: number;
+  /** m */
+  height: number;
+}
+
+export interface SpectrumPointInput {
+  /** s */
+  period: number;
+  /** g */
+  sa: number;
+}
+
+export type SpectrumInterpolation = 'linear' | 'log-log';
+
+export interface SpectrumInput {
+  points: SpectrumPointInput[];
+  interpolation?: SpectrumInterpolation;
+}
+
+export const ANALYSIS_LIMITS = {
+  minStoreys: 1,
+  maxStoreys: 500,
+  minSpectrumPoints: 2,
+  maxSpectrumPoints: 1000,
+} as const;
+
+export interface AnalysisRequest {
+  storeys: StoreyInput[];
+  spectrum: SpectrumInput;
+  /** 0 < zeta < 1, the same for every mode */
+  dampingRatio: number;
+  /** Use the first n modes; default all. */
+  modeCount?: number;
+  /** Use the fewest modes whose cumulative effective mass ratio reaches this (0 < r <= 1). */
+  targetMassRatio?: number;
+}
+
+/** One mode's maxima. Signed: they carry the sign of the roof-normalised shape. */
+export interface ModalResponse {
+  /** m, per level */
+  displacement: number[];
+  /** m, per storey: u_i - u_{i-1} */
+  drift: number[];
+  /** N, per level */
+  floorForce: number[];
+  /** N, per storey */
+  storeyShear: number[];
+  /** N*m, at the base of each storey */
+  overturningMoment: number[];
+  /** N */
+  baseShear: number;
+}
+
+export interface ModeResult {
+  number: number;
+  /** s */
+  period: number;
+  /** Hz */
+  frequency: number;
+  /** rad/s */
+  circularFrequency: number;
+  /** Roof-normalised (+1 at the roof). */
+  shape: number[];
+  /** For the roof-normalised shape. */
+  participationFactor: number;
+  /** kg */
+  effectiveMass: number;
+  effectiveMassRatio: number;
+  cumulativeMassRatio: number;
+  /** g, at this mode's period */
+  sa: number;
+  response: ModalResponse;
+}
+
+/** Combined maxima; all values non-negative. */
+export interface CombinedResponse {
+  displacement: number[];
+  drift: number[];
+  /** drift / storey height */
+  driftRatio: number[];
+  floorForce: number[];
+  storeyShear: number[];
+  overturningMoment: number[];
+  baseShear: number;
+  baseMoment: number;
+}
+
+export interface AnalysisResponse {
+  /** kg */
+  totalMass: number;
+  /** The modes used, fundamental first. */
+  modes: ModeResult[];
+  /** How many modes the building has (N); `modes` may hold fewer. */
+  availableModes: number;
+  combined: { srss: CombinedResponse; cqc: CombinedResponse; abs: CombinedResponse };
+  /** rho_ij of the modes used. */
+  correlation: number[][];
+  warnings: string[];
+  engineVersion: string;
+}
