@@ -1,3 +1,4 @@
+import { isArray } from './guards';
 /**
  * The planar shear building (method.md, "Model"). Storeys are numbered 1..N from the base up;
  * index 0 of every array is storey 1 / level 1. Storey i lies between level i-1 (level 0 is the
@@ -20,8 +21,7 @@ export const MAX_STOREYS = 500;
  * number > 0. Throws TypeError or RangeError naming the field and the storey.
  */
 export function assertStoreys(storeys: readonly Storey[]): void {
-  // Checked through a cast: Array.isArray would narrow a readonly array to any[].
-  if (!Array.isArray(storeys as unknown)) throw new TypeError('storeys must be an array');
+  if (!isArray(storeys)) throw new TypeError('storeys must be an array');
   if (storeys.length < 1 || storeys.length > MAX_STOREYS) {
     throw new RangeError(`storeys must have 1 to ${MAX_STOREYS} storeys (got ${storeys.length})`);
   }

@@ -1,3 +1,4 @@
+import { isArray } from './guards';
 /** One point of a design spectrum: period T (s) and spectral acceleration Sa (g). */
 export interface SpectrumPoint {
   period: number;
@@ -17,8 +18,7 @@ export interface SpectralValue {
  * increasing, Sa finite and >= 0. Throws TypeError or RangeError naming the point.
  */
 export function assertSpectrum(points: readonly SpectrumPoint[]): void {
-  // Checked through a cast: Array.isArray would narrow a readonly array to any[].
-  if (!Array.isArray(points as unknown)) throw new TypeError('spectrum.points must be an array');
+  if (!isArray(points)) throw new TypeError('spectrum.points must be an array');
   if (points.length < 2) throw new RangeError('spectrum.points must have at least two points');
   points.forEach((point, i) => {
     const where = `spectrum.points[${i}]`;
