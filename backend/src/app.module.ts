@@ -4,6 +4,7 @@ import { Module } from '@nestjs/common';
 import { ConfigModule } from '@nestjs/config';
 import { APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
+import { AnalysisModule } from './analysis/analysis.module';
 import { AuthModule } from './auth/auth.module';
 import { JwtAuthGuard } from './auth/jwt-auth.guard';
 import { AuthorizationModule } from './authorization/authorization.module';
@@ -26,6 +27,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     AuthorizationModule,
     AuthModule,
     UsersModule,
+    AnalysisModule,
     HealthModule,
     ...webApp,
   ],

@@ -2,12 +2,13 @@ import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module';
 import { configureApp } from './app.setup';
 import type { AppEnvironment } from './config/environment';
 
 async function bootstrap(): Promise<void> {
-  const app = configureApp(await NestFactory.create(AppModule));
+  const app = configureApp(await NestFactory.create<NestExpressApplication>(AppModule));
   const port = app.get(ConfigService<AppEnvironment, true>).get('port', { infer: true });
   await app.listen(port);
   Logger.log(`Tiermode is serving on http://localhost:${port}`, 'Bootstrap');

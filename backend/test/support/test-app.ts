@@ -1,4 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Test } from '@nestjs/testing';
 import request from 'supertest';
 import type { App } from 'supertest/types';
@@ -9,7 +10,9 @@ import { DEMO_PASSWORD } from '../../src/database/demo-accounts';
 /** The whole app, configured as main.ts configures it, on this test file's fresh database. */
 export async function createTestApp(): Promise<INestApplication<App>> {
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = configureApp(moduleRef.createNestApplication({ logger: ['error'] }));
+  const app = configureApp(
+    moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'] }),
+  );
   await app.init();
   return app as INestApplication<App>;
 }

@@ -8,8 +8,8 @@ import type {
 import { combineAbs, combineCqc, combineSrss, correlationMatrix } from './combination';
 import { modalResponse } from './modal-response';
 import { selectModeCount } from './mode-selection';
-import { naturalModes } from './modes';
-import { assertStoreys } from './shear-building';
+import { naturalModes, type Mode } from './modes';
+import { assertStoreys, type Storey } from './shear-building';
 import { assertSpectrum, spectralAcceleration } from './spectrum';
 
 /** Bumped whenever a change to the engine could change a number it returns. */
@@ -24,8 +24,12 @@ export const CLOSE_MODE_PERIOD_RATIO = 0.9;
  * The whole modal response spectrum analysis of a shear building: modes, spectral values,
  * modal maxima, and their SRSS, CQC and ABS combinations (method.md). Pure: the input is not
  * changed. Throws TypeError/RangeError naming the field when the input is not valid.
+ * `solveModes` is the eigensolution; the benchmark swaps in a general dense solver to compare.
  */
-export function analyse(request: AnalysisRequest): AnalysisResponse {
+export function analyse(
+  request: AnalysisRequest,
+  solveModes: (storeys: readonly Storey[]) => Mode[] = naturalModes,
+): AnalysisResponse {
   const { storeys, spectrum, dampingRatio } = request;
   assertStoreys(storeys);
   assertSpectrum(spectrum?.points);
@@ -37,7 +41,7 @@ export function analyse(request: AnalysisRequest): AnalysisResponse {
     throw new RangeError('spectrum.interpolation must be "linear" or "log-log"');
   }
 
-  const allModes = naturalModes(storeys);
+  const allModes = solveModes(storeys);
   const used = allModes.slice(
     0,
     selectModeCount(allModes, {

@@ -1,6 +1,9 @@
 import { assertStoreys, stiffnessTridiagonal, type Storey } from './shear-building';
 import { symmetricTridiagonalEigen } from './symmetric-tridiagonal';
 
+const TOO_EXTREME =
+  'the storey masses and stiffnesses are too far apart in size to analyse in double precision';
+
 /** One natural mode of the shear building. */
 export interface Mode {
   /** 1 = the fundamental (longest period). */
@@ -35,21 +38,43 @@ export interface Mode {
  * M_n = phi_n^T M phi_n, M*_n = L_n^2 / M_n.
  */
 export function naturalModes(storeys: readonly Storey[]): Mode[] {
+  const { a, b, rootMass } = standardForm(storeys);
+  const { values, vectors } = symmetricTridiagonalEigen(a, b);
+  return modesFromEigenpairs(storeys, rootMass, values, vectors);
+}
+
+/** A = M^-1/2 K M^-1/2 as its diagonal a and off-diagonal b, and the square roots of the masses. */
+export function standardForm(storeys: readonly Storey[]): {
+  a: number[];
+  b: number[];
+  rootMass: number[];
+} {
   assertStoreys(storeys);
-  const n = storeys.length;
   const { diagonal, offDiagonal } = stiffnessTridiagonal(storeys);
   const rootMass = storeys.map((s) => Math.sqrt(s.mass));
   const a = diagonal.map((k, i) => k / storeys[i].mass);
   const b = offDiagonal.map((k, i) => k / (rootMass[i] * rootMass[i + 1]));
-  const { values, vectors } = symmetricTridiagonalEigen(a, b);
+  if (![...a, ...b].every(Number.isFinite)) throw new RangeError(TOO_EXTREME);
+  return { a, b, rootMass };
+}
+
+/**
+ * The modes from the eigenpairs of A (values ascending, unit vectors x): phi = M^-1/2 x is the
+ * mass-normalised shape, with its sign chosen to make the roof move positive.
+ */
+export function modesFromEigenpairs(
+  storeys: readonly Storey[],
+  rootMass: readonly number[],
+  values: readonly number[],
+  vectors: readonly (readonly number[])[],
+): Mode[] {
+  const n = storeys.length;
   const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
 
   let cumulative = 0;
   return values.map((omegaSquared, j) => {
     if (!(omegaSquared > 0) || !Number.isFinite(omegaSquared)) {
-      throw new RangeError(
-        'the storey masses and stiffnesses are too far apart in size to analyse in double precision',
-      );
+      throw new RangeError(TOO_EXTREME);
     }
     const x = vectors[j];
     // The roof component of an eigenvector of an unreduced tridiagonal matrix is never zero.

@@ -1,0 +1,98 @@
+/**
+ * `npm run bench -w backend`: the full analysis (modes, spectral values, modal responses, SRSS,
+ * CQC and ABS of every mode) for 10, 50, 200 and 500 storeys, after a warm-up, as one JSON line per
+ * size with the median milliseconds; then the same through the naive path, a general dense
+ * eigensolver (mathjs `eigs` on the full A = M^-1/2 K M^-1/2), as the ratio to beat.
+ */
+import type { MathJsInstance } from 'mathjs' with { 'resolution-mode': 'import' };
+import { analyse } from '../src/analysis/engine/analyse';
+import { naturalModes, modesFromEigenpairs, standardForm } from '../src/analysis/engine/modes';
+import type { Storey } from '../src/analysis/engine/shear-building';
+
+const SIZES = [10, 50, 200, 500];
+const spectrum = {
+  points: [
+    { period: 0, sa: 0.4 },
+    { period: 0.15, sa: 1 },
+    { period: 0.6, sa: 1 },
+    { period: 8, sa: 0.075 },
+  ],
+};
+
+function building(n: number): Storey[] {
+  // Mass and stiffness tapering up the height, as in a real tower.
+  return Array.from({ length: n }, (_, i) => ({
+    mass: 4e5 * (1 - (0.4 * i) / n),
+    stiffness: 8e8 * (1 - (0.6 * i) / n),
+    height: i === 0 ? 4.5 : 3.5,
+  }));
+}
+
+type Eigs = MathJsInstance['eigs'];
+
+function denseModes(eigs: Eigs, storeys: readonly Storey[]) {
+  const { a, b, rootMass } = standardForm(storeys);
+  const n = a.length;
+  const dense = a.map((d, i) =>
+    a.map((_, j) => (i === j ? d : j === i + 1 ? b[i] : j === i - 1 ? b[j] : 0)),
+  );
+  const { eigenvectors } = eigs(dense);
+  const pairs = eigenvectors
+    .map((e) => ({ value: Number(e.value), vector: (e.vector as unknown as number[]).map(Number) }))
+    .sort((x, y) => x.value - y.value);
+  if (pairs.length !== n) throw new Error('mathjs returned too few eigenpairs');
+  return modesFromEigenpairs(
+    storeys,
+    rootMass,
+    pairs.map((p) => p.value),
+    pairs.map((p) => p.vector),
+  );
+}
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((x, y) => x - y);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
+function time(run: () => void, repetitions: number): number {
+  run(); // warm-up
+  const samples: number[] = [];
+  for (let r = 0; r < repetitions; r += 1) {
+    const start = performance.now();
+    run();
+    samples.push(performance.now() - start);
+  }
+  return median(samples);
+}
+
+const round = (ms: number) => Math.round(ms * 100) / 100;
+
+async function main(): Promise<void> {
+  // mathjs ships its types as an ES module; a dynamic import keeps this file CommonJS.
+  const { eigs } = await import('mathjs');
+  for (const n of SIZES) {
+    const storeys = building(n);
+    const request = { storeys, spectrum, dampingRatio: 0.05 };
+    const repetitions = n <= 50 ? 50 : n <= 200 ? 15 : 5;
+    const fullMs = time(() => analyse(request), repetitions);
+    const modesMs = time(() => naturalModes(storeys), repetitions);
+    const naiveRepetitions = n <= 50 ? 10 : 1;
+    const naiveMs = time(() => analyse(request, (s) => denseModes(eigs, s)), naiveRepetitions);
+    console.log(
+      JSON.stringify({
+        storeys: n,
+        fullAnalysisMedianMs: round(fullMs),
+        modesOnlyMedianMs: round(modesMs),
+        naiveFullAnalysisMedianMs: round(naiveMs),
+        naiveOverEngine: round(naiveMs / fullMs),
+        repetitions,
+      }),
+    );
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});

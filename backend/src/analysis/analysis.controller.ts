@@ -1,0 +1,18 @@
+import { Body, Controller, HttpCode, Post } from '@nestjs/common';
+import type { AnalysisResponse } from '@tiermode/shared-types';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { AnalysisService } from './analysis.service';
+import { AnalysisRequestDto } from './dto/analysis-request.dto';
+
+/** The stateless analysis: any signed-in user; nothing is stored. */
+@Controller('analysis')
+export class AnalysisController {
+  constructor(private readonly analysis: AnalysisService) {}
+
+  @Post()
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('create', 'Analysis'))
+  run(@Body() body: AnalysisRequestDto): AnalysisResponse {
+    return this.analysis.analyse(body);
+  }
+}
