@@ -14,6 +14,7 @@ import { FRONTEND_DIST } from './config/paths';
 import { DatabaseModule } from './database/database.module';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
+import { VerificationModule } from './verification/verification.module';
 
 // The built web app, when there is one; every non-API path gets index.html (client routing).
 const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
@@ -28,6 +29,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     AuthModule,
     UsersModule,
     AnalysisModule,
+    VerificationModule,
     HealthModule,
     ...webApp,
   ],

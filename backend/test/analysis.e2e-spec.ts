@@ -22,7 +22,10 @@ describe('POST /api/analysis', () => {
   let app: INestApplication<App>;
   let token: string;
   const post = (body: unknown) =>
-    request(app.getHttpServer()).post('/api/analysis').set('Authorization', `Bearer ${token}`).send(body as object);
+    request(app.getHttpServer())
+      .post('/api/analysis')
+      .set('Authorization', `Bearer ${token}`)
+      .send(body as object);
 
   beforeAll(async () => {
     app = await createTestApp();
@@ -36,15 +39,39 @@ describe('POST /api/analysis', () => {
     expect(body.totalMass).toBe(1_080_000);
     expect(body.modes).toHaveLength(5);
     expect(Object.keys(body.modes[0]).sort()).toEqual(
-      ['circularFrequency', 'cumulativeMassRatio', 'effectiveMass', 'effectiveMassRatio', 'frequency', 'number', 'participationFactor', 'period', 'response', 'sa', 'shape'].sort(),
+      [
+        'circularFrequency',
+        'cumulativeMassRatio',
+        'effectiveMass',
+        'effectiveMassRatio',
+        'frequency',
+        'number',
+        'participationFactor',
+        'period',
+        'response',
+        'sa',
+        'shape',
+      ].sort(),
     );
-    expect(Object.keys(body.modes[0].response).sort()).toEqual(
-      ['baseShear', 'displacement', 'drift', 'floorForce', 'overturningMoment', 'storeyShear'],
-    );
+    expect(Object.keys(body.modes[0].response).sort()).toEqual([
+      'baseShear',
+      'displacement',
+      'drift',
+      'floorForce',
+      'overturningMoment',
+      'storeyShear',
+    ]);
     for (const method of ['srss', 'cqc', 'abs']) {
-      expect(Object.keys(body.combined[method]).sort()).toEqual(
-        ['baseMoment', 'baseShear', 'displacement', 'drift', 'driftRatio', 'floorForce', 'overturningMoment', 'storeyShear'],
-      );
+      expect(Object.keys(body.combined[method]).sort()).toEqual([
+        'baseMoment',
+        'baseShear',
+        'displacement',
+        'drift',
+        'driftRatio',
+        'floorForce',
+        'overturningMoment',
+        'storeyShear',
+      ]);
       expect(body.combined[method].storeyShear).toHaveLength(5);
     }
     expect(body.modes[0].shape[4]).toBe(1);
@@ -70,31 +97,104 @@ describe('POST /api/analysis', () => {
     return body;
   };
   const cases: [string, unknown, string][] = [
-    ['a zero mass', withStorey(2, { mass: 0 }), 'storeys[2].mass (storey 3) must be a positive number (kg)'],
-    ['a negative stiffness', withStorey(0, { stiffness: -1 }), 'storeys[0].stiffness (storey 1) must be a positive number (N/m)'],
-    ['a number written as a string', withStorey(1, { height: '3.5' }), 'storeys[1].height (storey 2) must be a number (m)'],
-    ['a NaN-like string', withStorey(4, { mass: 'NaN' }), 'storeys[4].mass (storey 5) must be a number (kg)'],
-    ['a missing field', withStorey(3, { stiffness: undefined }), 'storeys[3].stiffness (storey 4) must be a number (N/m)'],
-    ['an unknown storey field', withStorey(0, { colour: 'red' }), 'property storeys[0].colour (storey 1) should not exist'],
+    [
+      'a zero mass',
+      withStorey(2, { mass: 0 }),
+      'storeys[2].mass (storey 3) must be a positive number (kg)',
+    ],
+    [
+      'a negative stiffness',
+      withStorey(0, { stiffness: -1 }),
+      'storeys[0].stiffness (storey 1) must be a positive number (N/m)',
+    ],
+    [
+      'a number written as a string',
+      withStorey(1, { height: '3.5' }),
+      'storeys[1].height (storey 2) must be a number (m)',
+    ],
+    [
+      'a NaN-like string',
+      withStorey(4, { mass: 'NaN' }),
+      'storeys[4].mass (storey 5) must be a number (kg)',
+    ],
+    [
+      'a missing field',
+      withStorey(3, { stiffness: undefined }),
+      'storeys[3].stiffness (storey 4) must be a number (N/m)',
+    ],
+    [
+      'an unknown storey field',
+      withStorey(0, { colour: 'red' }),
+      'property storeys[0].colour (storey 1) should not exist',
+    ],
     ['no storeys', { ...valid(), storeys: [] }, 'storeys must have at least one storey'],
-    ['501 storeys', { ...valid(), storeys: Array.from({ length: 501 }, () => storey) }, 'storeys must have at most 500 storeys'],
-    ['storeys that are not a list', { ...valid(), storeys: 'five' }, 'storeys must be a list of { mass, stiffness, height }'],
-    ['a one-point spectrum', { ...valid(), spectrum: { points: [{ period: 0, sa: 1 }] } }, 'spectrum.points must have at least two points'],
+    [
+      '501 storeys',
+      { ...valid(), storeys: Array.from({ length: 501 }, () => storey) },
+      'storeys must have at most 500 storeys',
+    ],
+    [
+      'storeys that are not a list',
+      { ...valid(), storeys: 'five' },
+      'storeys must be a list of { mass, stiffness, height }',
+    ],
+    [
+      'a one-point spectrum',
+      { ...valid(), spectrum: { points: [{ period: 0, sa: 1 }] } },
+      'spectrum.points must have at least two points',
+    ],
     [
       'unsorted spectrum periods',
-      { ...valid(), spectrum: { points: [{ period: 0, sa: 1 }, { period: 1, sa: 1 }, { period: 0.5, sa: 1 }] } },
+      {
+        ...valid(),
+        spectrum: {
+          points: [
+            { period: 0, sa: 1 },
+            { period: 1, sa: 1 },
+            { period: 0.5, sa: 1 },
+          ],
+        },
+      },
       'spectrum.points[2].period (point 3) must be greater than the period of point 2',
     ],
-    ['a negative spectral value', { ...valid(), spectrum: { points: [{ period: 0, sa: 1 }, { period: 1, sa: -0.1 }] } }, 'spectrum.points[1].sa (point 2) must be a number >= 0 (g)'],
-    ['an unknown interpolation', { ...valid(), spectrum: { ...valid().spectrum, interpolation: 'cubic' } }, 'spectrum.interpolation must be "linear" or "log-log"'],
+    [
+      'a negative spectral value',
+      {
+        ...valid(),
+        spectrum: {
+          points: [
+            { period: 0, sa: 1 },
+            { period: 1, sa: -0.1 },
+          ],
+        },
+      },
+      'spectrum.points[1].sa (point 2) must be a number >= 0 (g)',
+    ],
+    [
+      'an unknown interpolation',
+      { ...valid(), spectrum: { ...valid().spectrum, interpolation: 'cubic' } },
+      'spectrum.interpolation must be "linear" or "log-log"',
+    ],
     ['a missing spectrum', { ...valid(), spectrum: undefined }, 'spectrum must be given'],
     ['damping 0', { ...valid(), dampingRatio: 0 }, 'dampingRatio must be greater than 0'],
     ['damping 1', { ...valid(), dampingRatio: 1 }, 'dampingRatio must be less than 1'],
-    ['a missing damping ratio', { ...valid(), dampingRatio: undefined }, 'dampingRatio must be a number (a fraction of critical, e.g. 0.05)'],
+    [
+      'a missing damping ratio',
+      { ...valid(), dampingRatio: undefined },
+      'dampingRatio must be a number (a fraction of critical, e.g. 0.05)',
+    ],
     ['an unknown top-level field', { ...valid(), units: 'US' }, 'property units should not exist'],
-    ['more modes than storeys', { ...valid(), modeCount: 6 }, 'modeCount must be a whole number from 1 to 5 (the number of storeys)'],
+    [
+      'more modes than storeys',
+      { ...valid(), modeCount: 6 },
+      'modeCount must be a whole number from 1 to 5 (the number of storeys)',
+    ],
     ['a fractional mode count', { ...valid(), modeCount: 2.5 }, 'modeCount must be a whole number'],
-    ['values too large for double precision', withStorey(0, { stiffness: 1e308, mass: 1e-300 }), 'the storey masses and stiffnesses are too far apart in size to analyse in double precision'],
+    [
+      'values too large for double precision',
+      withStorey(0, { stiffness: 1e308, mass: 1e-300 }),
+      'the storey masses and stiffnesses are too far apart in size to analyse in double precision',
+    ],
   ];
 
   it.each(cases)('refuses %s with 400 naming the field', async (_, body, message) => {
@@ -123,5 +223,29 @@ describe('POST /api/analysis', () => {
       .send('[1, 2, 3]')
       .expect(400);
     expect(res.body.statusCode).toBe(400);
+  });
+});
+
+describe('GET /api/verification', () => {
+  let app: INestApplication<App>;
+
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(() => app.close());
+
+  it('lists every reference case with its source and the values the engine computes now', async () => {
+    const token = await tokenFor(app, 'student');
+    const res = await request(app.getHttpServer())
+      .get('/api/verification')
+      .set('Authorization', `Bearer ${token}`)
+      .expect(200);
+    expect(res.body.length).toBeGreaterThanOrEqual(5);
+    for (const reference of res.body) {
+      expect(reference.pass).toBe(true);
+      expect(reference.source).toEqual(expect.any(String));
+      expect(reference.rows.length).toBeGreaterThan(0);
+    }
+    await request(app.getHttpServer()).get('/api/verification').expect(401);
   });
 });

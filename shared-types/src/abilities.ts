@@ -26,6 +26,7 @@ export const SUBJECTS = [
   'Library',
   'Outbox',
   'Analysis',
+  'Verification',
 ] as const;
 export type Subject = (typeof SUBJECTS)[number];
 

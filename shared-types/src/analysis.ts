@@ -106,3 +106,26 @@ export interface AnalysisResponse {
   warnings: string[];
   engineVersion: string;
 }
+
+/** One checked value of a reference case. */
+export interface VerificationRow {
+  quantity: string;
+  expected: number;
+  computed: number;
+  /** |computed - expected| / |expected| (absolute where expected is 0) */
+  difference: number;
+  tolerance: number;
+  pass: boolean;
+}
+
+/** `GET /api/verification`: a published reference case and what the running engine gives now. */
+export interface VerificationCaseResult {
+  id: string;
+  title: string;
+  /** The published source of the expected values, or "common practice" / "from memory". */
+  source: string;
+  inputs: string[];
+  rows: VerificationRow[];
+  pass: boolean;
+  engineVersion: string;
+}

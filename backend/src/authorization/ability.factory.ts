@@ -14,10 +14,12 @@ export class AbilityFactory {
   createForUser(user: User, today: Date = new Date()): AppAbility {
     const { can, cannot, build } = new AbilityBuilder<AppAbility>(createMongoAbility);
 
-    // Everyone signed in reads their own account and may run a stateless analysis.
+    // Everyone signed in reads their own account, may run a stateless analysis and may see the
+    // engine checked against its reference cases.
     can('read', 'User', { id: user.id });
     can('create', 'Analysis');
     can('read', 'Library');
+    can('read', 'Verification');
 
     switch (user.role) {
       case 'admin':

@@ -1,18 +1,31 @@
 import type { ValidationError } from 'class-validator';
 import { formatValidationErrors } from './format-validation-errors';
 
-const error = (property: string, constraints?: Record<string, string>, children: ValidationError[] = []) =>
-  ({ property, constraints, children }) as ValidationError;
+const error = (
+  property: string,
+  constraints?: Record<string, string>,
+  children: ValidationError[] = [],
+) => ({ property, constraints, children }) as ValidationError;
 
 describe('formatValidationErrors', () => {
   it('names the full path and the storey of a nested field', () => {
-    const tree = [error('storeys', undefined, [error('3', undefined, [error('mass', { isPositive: 'mass must be a positive number' })])])];
-    expect(formatValidationErrors(tree)).toEqual(['storeys[3].mass (storey 4) must be a positive number']);
+    const tree = [
+      error('storeys', undefined, [
+        error('3', undefined, [error('mass', { isPositive: 'mass must be a positive number' })]),
+      ]),
+    ];
+    expect(formatValidationErrors(tree)).toEqual([
+      'storeys[3].mass (storey 4) must be a positive number',
+    ]);
   });
 
   it('names the point of a spectrum field and keeps top-level messages as they are', () => {
     const tree = [
-      error('spectrum', undefined, [error('points', undefined, [error('0', undefined, [error('sa', { isNumber: 'sa must be a number' })])])]),
+      error('spectrum', undefined, [
+        error('points', undefined, [
+          error('0', undefined, [error('sa', { isNumber: 'sa must be a number' })]),
+        ]),
+      ]),
       error('dampingRatio', { max: 'dampingRatio must be less than 1' }),
     ];
     expect(formatValidationErrors(tree)).toEqual([
@@ -22,7 +35,15 @@ describe('formatValidationErrors', () => {
   });
 
   it('rewrites whitelist refusals with the path', () => {
-    const tree = [error('storeys', undefined, [error('0', undefined, [error('colour', { whitelistValidation: 'property colour should not exist' })])])];
-    expect(formatValidationErrors(tree)).toEqual(['property storeys[0].colour (storey 1) should not exist']);
+    const tree = [
+      error('storeys', undefined, [
+        error('0', undefined, [
+          error('colour', { whitelistValidation: 'property colour should not exist' }),
+        ]),
+      ]),
+    ];
+    expect(formatValidationErrors(tree)).toEqual([
+      'property storeys[0].colour (storey 1) should not exist',
+    ]);
   });
 });

@@ -1,0 +1,16 @@
+import { Controller, Get } from '@nestjs/common';
+import type { VerificationCaseResult } from '@tiermode/shared-types';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { VerificationService } from './verification.service';
+
+@Controller('verification')
+export class VerificationController {
+  constructor(private readonly verification: VerificationService) {}
+
+  /** The reference cases, each with the values the running engine computes now. */
+  @Get()
+  @CheckPolicies((ability) => ability.can('read', 'Verification'))
+  list(): VerificationCaseResult[] {
+    return this.verification.all();
+  }
+}
