@@ -14,7 +14,8 @@ export async function createTestApp(): Promise<INestApplication<App>> {
     moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'] }),
   );
   await app.init();
-  return app as INestApplication<App>;
+  // supertest's App type for the server, which Nest types as a plain http.Server.
+  return app as unknown as INestApplication<App>;
 }
 
 export type DemoRole = 'admin' | 'designer' | 'reviewer' | 'student';
