@@ -14,8 +14,7 @@ export async function createTestApp(): Promise<INestApplication<App>> {
     moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'] }),
   );
   await app.init();
-  // supertest's App type for the server, which Nest types as a plain http.Server.
-  return app as unknown as INestApplication<App>;
+  return app;
 }
 
 export type DemoRole = 'admin' | 'designer' | 'reviewer' | 'student';
