@@ -129,3 +129,34 @@ export interface VerificationCaseResult {
   pass: boolean;
   engineVersion: string;
 }
+
+/** `POST /api/spectra/generate`: a design spectrum as an editable point table. */
+export type SpectrumGeneratorKind = 'asce7-two-period' | 'en1998-elastic' | 'en1998-design';
+export type GroundType = 'A' | 'B' | 'C' | 'D' | 'E';
+
+export interface SpectrumGenerateRequest {
+  kind: SpectrumGeneratorKind;
+  /** ASCE 7: SDS, SD1 (g) and TL (s). */
+  sds?: number;
+  sd1?: number;
+  tl?: number;
+  /** EN 1998-1: agR (g), gamma_I, ground type, spectrum type 1 or 2. */
+  agR?: number;
+  importanceFactor?: number;
+  groundType?: GroundType;
+  spectrumType?: 1 | 2;
+  /** EN 1998-1 elastic: viscous damping in percent (default 5). */
+  dampingPercent?: number;
+  /** EN 1998-1 design: behaviour factor q and lower-bound factor beta (default 0.2). */
+  q?: number;
+  beta?: number;
+  /** Last period of the table, s. */
+  maxPeriod?: number;
+}
+
+export interface SpectrumGenerateResponse {
+  points: SpectrumPointInput[];
+  interpolation: SpectrumInterpolation;
+  /** The clause the table follows, as the software reads it. */
+  basis: string;
+}

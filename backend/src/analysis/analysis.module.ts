@@ -1,9 +1,10 @@
 import { Module } from '@nestjs/common';
 import { AnalysisController } from './analysis.controller';
 import { AnalysisService } from './analysis.service';
+import { SpectraController } from './spectra.controller';
 
 @Module({
-  controllers: [AnalysisController],
+  controllers: [AnalysisController, SpectraController],
   providers: [AnalysisService],
   exports: [AnalysisService],
 })

@@ -1,0 +1,70 @@
+import type {
+  GroundType,
+  SpectrumGenerateRequest,
+  SpectrumGeneratorKind,
+} from '@tiermode/shared-types';
+import { IsIn, IsNumber, IsOptional, IsPositive, Min, ValidateIf } from 'class-validator';
+
+const FINITE = { allowNaN: false, allowInfinity: false };
+const asce = (o: SpectrumGenerateDto) => o.kind === 'asce7-two-period';
+const en = (o: SpectrumGenerateDto) => o.kind === 'en1998-elastic' || o.kind === 'en1998-design';
+const positiveNumber = (field: string, unit: string) => [
+  IsNumber(FINITE, { message: `${field} must be a number (${unit})` }),
+  IsPositive({ message: `${field} must be a positive number (${unit})` }),
+];
+const apply =
+  (...decorators: PropertyDecorator[]): PropertyDecorator =>
+  (target, key) =>
+    decorators.forEach((d) => d(target, key));
+
+export class SpectrumGenerateDto implements SpectrumGenerateRequest {
+  @IsIn(['asce7-two-period', 'en1998-elastic', 'en1998-design'], {
+    message: 'kind must be one of: asce7-two-period, en1998-elastic, en1998-design',
+  })
+  kind!: SpectrumGeneratorKind;
+
+  @ValidateIf(asce)
+  @apply(...positiveNumber('sds', 'g'))
+  sds?: number;
+
+  @ValidateIf(asce)
+  @apply(...positiveNumber('sd1', 'g'))
+  sd1?: number;
+
+  @ValidateIf(asce)
+  @apply(...positiveNumber('tl', 's'))
+  tl?: number;
+
+  @ValidateIf(en)
+  @apply(...positiveNumber('agR', 'g'))
+  agR?: number;
+
+  @IsOptional()
+  @apply(...positiveNumber('importanceFactor', 'gamma_I'))
+  importanceFactor?: number;
+
+  @ValidateIf(en)
+  @IsIn(['A', 'B', 'C', 'D', 'E'], { message: 'groundType must be one of A, B, C, D, E' })
+  groundType?: GroundType;
+
+  @ValidateIf(en)
+  @IsIn([1, 2], { message: 'spectrumType must be 1 or 2' })
+  spectrumType?: 1 | 2;
+
+  @IsOptional()
+  @IsNumber(FINITE, { message: 'dampingPercent must be a number (%)' })
+  @Min(0, { message: 'dampingPercent must be a number >= 0 (%)' })
+  dampingPercent?: number;
+
+  @ValidateIf((o: SpectrumGenerateDto) => o.kind === 'en1998-design')
+  @apply(...positiveNumber('q', 'behaviour factor'))
+  q?: number;
+
+  @IsOptional()
+  @apply(...positiveNumber('beta', 'lower-bound factor'))
+  beta?: number;
+
+  @IsOptional()
+  @apply(...positiveNumber('maxPeriod', 's'))
+  maxPeriod?: number;
+}

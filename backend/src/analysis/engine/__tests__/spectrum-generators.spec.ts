@@ -1,0 +1,94 @@
+import { spectralAcceleration } from '../spectrum';
+import {
+  asce7TwoPeriodSpectrum,
+  dampingCorrection,
+  en1998DesignSpectrum,
+  en1998ElasticSpectrum,
+} from '../spectrum-generators';
+
+const at = (points: ReturnType<typeof asce7TwoPeriodSpectrum>, t: number) =>
+  spectralAcceleration(points, t, 'log-log').sa;
+
+describe('ASCE 7 two-period design spectrum (ASCE 7-16 11.4.6)', () => {
+  // SDS = 1.0 g, SD1 = 0.6 g, TL = 8 s: T0 = 0.12 s, Ts = 0.6 s, worked by hand.
+  const points = asce7TwoPeriodSpectrum({ sds: 1.0, sd1: 0.6, tl: 8 });
+
+  it('passes through the branch points', () => {
+    expect(at(points, 0)).toBeCloseTo(0.4, 12); // 0.4 SDS at T = 0
+    expect(at(points, 0.12)).toBeCloseTo(1.0, 12); // SDS at T0
+    expect(at(points, 0.6)).toBeCloseTo(1.0, 12); // SDS at Ts
+    expect(at(points, 8)).toBeCloseTo(0.075, 12); // SD1/TL at TL
+  });
+
+  it('follows 0.4 + 0.6 T/T0, SD1/T and SD1 TL / T^2 between them', () => {
+    expect(at(points, 0.06)).toBeCloseTo(0.7, 12); // SDS (0.4 + 0.6 x 0.5)
+    expect(at(points, 1.5)).toBeCloseTo(0.4, 9); // 0.6 / 1.5
+    expect(at(points, 2.37)).toBeCloseTo(0.6 / 2.37, 9);
+    expect(at(points, 10)).toBeCloseTo((0.6 * 8) / 100, 9); // 0.048
+    expect(points[points.length - 1].period).toBe(10);
+  });
+
+  it('refuses bad parameters, naming them', () => {
+    expect(() => asce7TwoPeriodSpectrum({ sds: -1, sd1: 0.6, tl: 8 })).toThrow(
+      'sds must be a positive number',
+    );
+    expect(() => asce7TwoPeriodSpectrum({ sds: 1, sd1: 0.6, tl: 0.5 })).toThrow(
+      'tl must be longer than Ts = SD1/SDS',
+    );
+  });
+});
+
+describe('EN 1998-1:2004 spectra', () => {
+  it('takes eta = 1 at 5% damping and never below 0.55 (3.2.2.2(3))', () => {
+    expect(dampingCorrection(5)).toBe(1);
+    expect(dampingCorrection(10)).toBeCloseTo(Math.sqrt(10 / 15), 14);
+    expect(dampingCorrection(40)).toBe(0.55);
+  });
+
+  it('gives the Type 1, ground C elastic spectrum at its branch points (3.2.2.2, Table 3.2 from memory)', () => {
+    // ag = 0.25 g, S = 1.15, TB = 0.2, TC = 0.6, TD = 2.0 s, eta = 1: plateau 2.5 x 0.25 x 1.15 = 0.71875 g.
+    const points = en1998ElasticSpectrum({ agR: 0.25, groundType: 'C', spectrumType: 1 });
+    const sa = (t: number) => spectralAcceleration(points, t, 'log-log').sa;
+    expect(sa(0)).toBeCloseTo(0.2875, 12); // ag S
+    expect(sa(0.2)).toBeCloseTo(0.71875, 12);
+    expect(sa(0.6)).toBeCloseTo(0.71875, 12);
+    expect(sa(1.2)).toBeCloseTo(0.359375, 9); // x TC/T = 0.5
+    expect(sa(2.0)).toBeCloseTo(0.215625, 12);
+    expect(sa(4.0)).toBeCloseTo((0.71875 * 0.6 * 2) / 16, 9);
+  });
+
+  it('gives the Type 2, ground A elastic spectrum with 10% damping (Table 3.3 from memory)', () => {
+    const points = en1998ElasticSpectrum({
+      agR: 0.1,
+      groundType: 'A',
+      spectrumType: 2,
+      dampingPercent: 10,
+    });
+    const eta = Math.sqrt(10 / 15);
+    expect(spectralAcceleration(points, 0.05).sa).toBeCloseTo(0.25 * eta, 12); // TB = 0.05 s
+    expect(spectralAcceleration(points, 0.25).sa).toBeCloseTo(0.25 * eta, 12); // TC = 0.25 s
+  });
+
+  it('gives the design spectrum with q and the beta ag lower bound (3.2.2.5)', () => {
+    // ag = 0.3 g, ground B Type 1 (S = 1.2, TB 0.15, TC 0.5, TD 2.0), q = 4, beta = 0.2:
+    // T = 0: 0.3 x 1.2 x 2/3 = 0.24; plateau 2.5 x 0.3 x 1.2 / 4 = 0.225; floor 0.06 g.
+    const points = en1998DesignSpectrum({ agR: 0.3, groundType: 'B', spectrumType: 1, q: 4 });
+    const sa = (t: number) => spectralAcceleration(points, t, 'log-log').sa;
+    expect(sa(0)).toBeCloseTo(0.24, 12);
+    expect(sa(0.15)).toBeCloseTo(0.225, 12);
+    expect(sa(0.5)).toBeCloseTo(0.225, 12);
+    expect(sa(1.0)).toBeCloseTo(0.1125, 9);
+    // At TD the branch gives 0.225 x 0.5 / 2 = 0.05625 g, below the 0.06 g floor, which governs.
+    expect(sa(2.0)).toBeCloseTo(0.06, 12);
+    expect(sa(4.0)).toBeCloseTo(0.06, 12);
+  });
+
+  it('refuses an unknown ground type or spectrum type', () => {
+    expect(() =>
+      en1998ElasticSpectrum({ agR: 0.1, groundType: 'F' as 'A', spectrumType: 1 }),
+    ).toThrow('groundType must be one of A, B, C, D, E');
+    expect(() =>
+      en1998ElasticSpectrum({ agR: 0.1, groundType: 'A', spectrumType: 3 as 1 }),
+    ).toThrow('spectrumType must be 1 or 2');
+  });
+});

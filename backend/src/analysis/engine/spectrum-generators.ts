@@ -1,0 +1,174 @@
+import type { GroundType } from '@tiermode/shared-types';
+import type { SpectrumPoint } from './spectrum';
+
+/**
+ * Design spectrum generators. Each returns an editable point table (T s, Sa g) that holds every
+ * branch point exactly and samples the curved branches densely enough for linear interpolation
+ * (the 1/T and 1/T^2 branches are also exact under log-log interpolation between the samples).
+ */
+
+/** Periods from `from` to `to` (exclusive of `from`, inclusive of `to`), finer at short periods. */
+function samplePeriods(from: number, to: number): number[] {
+  const periods: number[] = [];
+  let t = from;
+  while (t < to - 1e-12) {
+    const step = t < 1 ? 0.02 : t < 3 ? 0.05 : 0.25;
+    t = Math.min(to, Math.round((t + step) * 1e6) / 1e6);
+    periods.push(t);
+  }
+  return periods;
+}
+
+function positive(name: string, value: number): void {
+  if (!Number.isFinite(value) || value <= 0)
+    throw new RangeError(`${name} must be a positive number`);
+}
+
+export interface Asce7TwoPeriodInput {
+  /** SDS, g */
+  sds: number;
+  /** SD1, g */
+  sd1: number;
+  /** TL, s */
+  tl: number;
+  /** Last period of the table, s (default the larger of 10 s and TL + 2 s). */
+  maxPeriod?: number;
+}
+
+/**
+ * The ASCE 7 two-period design response spectrum (ASCE 7-16 11.4.6; ASCE 7-22 11.4.5.2, clause
+ * number from memory): T0 = 0.2 SD1/SDS, Ts = SD1/SDS;
+ * Sa = SDS (0.4 + 0.6 T/T0) for T < T0; SDS for T0 <= T <= Ts; SD1/T for Ts < T <= TL;
+ * SD1 TL / T^2 for T > TL.
+ */
+export function asce7TwoPeriodSpectrum(input: Asce7TwoPeriodInput): SpectrumPoint[] {
+  const { sds, sd1, tl } = input;
+  positive('sds', sds);
+  positive('sd1', sd1);
+  positive('tl', tl);
+  const ts = sd1 / sds;
+  const t0 = 0.2 * ts;
+  if (tl <= ts) throw new RangeError('tl must be longer than Ts = SD1/SDS');
+  const maxPeriod = input.maxPeriod ?? Math.max(10, tl + 2);
+  positive('maxPeriod', maxPeriod);
+  if (maxPeriod <= ts) throw new RangeError('maxPeriod must be longer than Ts = SD1/SDS');
+  const sa = (t: number) =>
+    t < t0 ? sds * (0.4 + (0.6 * t) / t0) : t <= ts ? sds : t <= tl ? sd1 / t : (sd1 * tl) / t ** 2;
+  const periods = [0, t0, ts, ...samplePeriods(ts, maxPeriod), tl].filter((t) => t <= maxPeriod);
+  return toPoints(periods, sa);
+}
+
+export type En1998SpectrumType = 1 | 2;
+
+/** S, TB, TC, TD by ground type: EN 1998-1:2004 Tables 3.2 (Type 1) and 3.3 (Type 2), from memory. */
+export const EN1998_GROUND_PARAMETERS: Readonly<
+  Record<
+    En1998SpectrumType,
+    Readonly<Record<GroundType, readonly [number, number, number, number]>>
+  >
+> = {
+  1: {
+    A: [1.0, 0.15, 0.4, 2.0],
+    B: [1.2, 0.15, 0.5, 2.0],
+    C: [1.15, 0.2, 0.6, 2.0],
+    D: [1.35, 0.2, 0.8, 2.0],
+    E: [1.4, 0.15, 0.5, 2.0],
+  },
+  2: {
+    A: [1.0, 0.05, 0.25, 1.2],
+    B: [1.35, 0.05, 0.25, 1.2],
+    C: [1.5, 0.1, 0.25, 1.2],
+    D: [1.8, 0.1, 0.3, 1.2],
+    E: [1.6, 0.05, 0.25, 1.2],
+  },
+};
+
+export interface En1998Input {
+  /** Reference peak ground acceleration on type A ground, agR, in g. */
+  agR: number;
+  /** Importance factor gamma_I (default 1); ag = gamma_I agR. */
+  importanceFactor?: number;
+  groundType: GroundType;
+  spectrumType: En1998SpectrumType;
+  /** Last period of the table, s (default 4 s). */
+  maxPeriod?: number;
+}
+
+function groundParameters(input: En1998Input) {
+  const byGround = EN1998_GROUND_PARAMETERS[input.spectrumType];
+  if (!byGround) throw new RangeError('spectrumType must be 1 or 2');
+  const row = byGround[input.groundType];
+  if (!row) throw new RangeError('groundType must be one of A, B, C, D, E');
+  positive('agR', input.agR);
+  const importance = input.importanceFactor ?? 1;
+  positive('importanceFactor', importance);
+  const maxPeriod = input.maxPeriod ?? 4;
+  positive('maxPeriod', maxPeriod);
+  const [s, tb, tc, td] = row;
+  return { ag: importance * input.agR, s, tb, tc, td, maxPeriod };
+}
+
+/** eta = sqrt(10 / (5 + xi)) >= 0.55, xi in percent (EN 1998-1 3.2.2.2(3)). */
+export function dampingCorrection(dampingPercent: number): number {
+  if (!Number.isFinite(dampingPercent) || dampingPercent < 0) {
+    throw new RangeError('dampingPercent must be a number >= 0');
+  }
+  return Math.max(0.55, Math.sqrt(10 / (5 + dampingPercent)));
+}
+
+/**
+ * EN 1998-1:2004 3.2.2.2 horizontal elastic response spectrum, in g:
+ * 0 <= T <= TB: ag S (1 + T/TB (2.5 eta - 1)); TB..TC: 2.5 ag S eta; TC..TD: 2.5 ag S eta TC/T;
+ * TD..: 2.5 ag S eta TC TD / T^2.
+ */
+export function en1998ElasticSpectrum(
+  input: En1998Input & { dampingPercent?: number },
+): SpectrumPoint[] {
+  const { ag, s, tb, tc, td, maxPeriod } = groundParameters(input);
+  const eta = dampingCorrection(input.dampingPercent ?? 5);
+  const plateau = 2.5 * ag * s * eta;
+  const sa = (t: number) =>
+    t <= tb
+      ? ag * s * (1 + (t / tb) * (2.5 * eta - 1))
+      : t <= tc
+        ? plateau
+        : t <= td
+          ? (plateau * tc) / t
+          : (plateau * tc * td) / t ** 2;
+  return toPoints(branchPeriods(tb, tc, td, maxPeriod), sa);
+}
+
+/**
+ * EN 1998-1:2004 3.2.2.5 design spectrum for elastic analysis, in g, with behaviour factor q and
+ * lower bound beta ag (beta = 0.2 recommended): 0 <= T <= TB: ag S (2/3 + T/TB (2.5/q - 2/3));
+ * TB..TC: 2.5 ag S / q; TC..TD: max(2.5 ag S TC / (q T), beta ag); TD..: max(2.5 ag S TC TD /
+ * (q T^2), beta ag).
+ */
+export function en1998DesignSpectrum(
+  input: En1998Input & { q: number; beta?: number },
+): SpectrumPoint[] {
+  const { ag, s, tb, tc, td, maxPeriod } = groundParameters(input);
+  positive('q', input.q);
+  const beta = input.beta ?? 0.2;
+  positive('beta', beta);
+  const plateau = (2.5 * ag * s) / input.q;
+  const floor = beta * ag;
+  const sa = (t: number) =>
+    t <= tb
+      ? ag * s * (2 / 3 + (t / tb) * (2.5 / input.q - 2 / 3))
+      : t <= tc
+        ? plateau
+        : t <= td
+          ? Math.max((plateau * tc) / t, floor)
+          : Math.max((plateau * tc * td) / t ** 2, floor);
+  return toPoints(branchPeriods(tb, tc, td, maxPeriod), sa);
+}
+
+function branchPeriods(tb: number, tc: number, td: number, maxPeriod: number): number[] {
+  return [0, tb, ...samplePeriods(tb, maxPeriod), tc, td].filter((t) => t <= maxPeriod);
+}
+
+function toPoints(periods: number[], sa: (t: number) => number): SpectrumPoint[] {
+  const unique = [...new Set(periods.map((t) => Math.round(t * 1e9) / 1e9))].sort((a, b) => a - b);
+  return unique.map((period) => ({ period, sa: sa(period) }));
+}

@@ -1,0 +1,84 @@
+import type { INestApplication } from '@nestjs/common';
+import request from 'supertest';
+import type { App } from 'supertest/types';
+import { createTestApp, tokenFor } from './support/test-app';
+
+describe('POST /api/spectra/generate', () => {
+  let app: INestApplication<App>;
+  let token: string;
+  const post = (body: object) =>
+    request(app.getHttpServer())
+      .post('/api/spectra/generate')
+      .set('Authorization', `Bearer ${token}`)
+      .send(body);
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    token = await tokenFor(app, 'designer');
+  });
+  afterAll(() => app.close());
+
+  it('returns an ASCE 7 two-period table that the analysis accepts as it is', async () => {
+    const res = await post({ kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 8 }).expect(200);
+    expect(res.body.points[0]).toEqual({ period: 0, sa: 0.4 });
+    expect(res.body.points).toContainEqual({ period: 0.6, sa: 1 });
+    expect(res.body.basis).toMatch(/ASCE 7-16 11\.4\.6/);
+    const storeys = [{ mass: 2e5, stiffness: 3e8, height: 3.5 }];
+    await request(app.getHttpServer())
+      .post('/api/analysis')
+      .set('Authorization', `Bearer ${token}`)
+      .send({
+        storeys,
+        spectrum: { points: res.body.points, interpolation: res.body.interpolation },
+        dampingRatio: 0.05,
+      })
+      .expect(200);
+  });
+
+  it('returns EN 1998-1 elastic and design tables', async () => {
+    const elastic = await post({
+      kind: 'en1998-elastic',
+      agR: 0.25,
+      groundType: 'C',
+      spectrumType: 1,
+    }).expect(200);
+    expect(elastic.body.points).toContainEqual({ period: 0.6, sa: expect.closeTo(0.71875, 12) });
+    const design = await post({
+      kind: 'en1998-design',
+      agR: 0.3,
+      groundType: 'B',
+      spectrumType: 1,
+      q: 4,
+    }).expect(200);
+    expect(design.body.points[0].sa).toBeCloseTo(0.24, 12);
+  });
+
+  it.each([
+    [{ kind: 'asce7-two-period', sds: -1, sd1: 0.6, tl: 8 }, 'sds must be a positive number (g)'],
+    [{ kind: 'asce7-two-period', sds: 1, tl: 8 }, 'sd1 must be a number (g)'],
+    [
+      { kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 0.3 },
+      'tl must be longer than Ts = SD1/SDS',
+    ],
+    [
+      { kind: 'en1998-elastic', agR: 0.2, groundType: 'F', spectrumType: 1 },
+      'groundType must be one of A, B, C, D, E',
+    ],
+    [
+      { kind: 'en1998-elastic', agR: 0.2, groundType: 'A', spectrumType: 3 },
+      'spectrumType must be 1 or 2',
+    ],
+    [
+      { kind: 'en1998-design', agR: 0.2, groundType: 'A', spectrumType: 1 },
+      'q must be a number (behaviour factor)',
+    ],
+    [
+      { kind: 'en1998-design', agR: 0.2, groundType: 'A', spectrumType: 1, q: 0 },
+      'q must be a positive number (behaviour factor)',
+    ],
+    [{ kind: 'mystery' }, 'kind must be one of: asce7-two-period, en1998-elastic, en1998-design'],
+  ])('refuses %j with 400 naming the field', async (body, message) => {
+    const res = await post(body).expect(400);
+    expect(res.body.message).toContain(message);
+  });
+});
