@@ -3,10 +3,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn, type DemoRole } from './support/browser';
 
 const NAVIGATION: Record<DemoRole, string[]> = {
-  admin: ['Start', 'People'],
-  designer: ['Start'],
-  reviewer: ['Start'],
-  student: ['Start'],
+  admin: ['Start', 'Analysis', 'Verification', 'People'],
+  designer: ['Start', 'Analysis', 'Verification'],
+  reviewer: ['Start', 'Analysis', 'Verification'],
+  student: ['Start', 'Analysis', 'Verification'],
 };
 const NAMES: Record<DemoRole, string> = {
   admin: 'Rowan Pike',

@@ -1,5 +1,7 @@
 import GroupIcon from '@mui/icons-material/Group';
 import HomeIcon from '@mui/icons-material/Home';
+import StackedLineChartIcon from '@mui/icons-material/StackedLineChart';
+import VerifiedIcon from '@mui/icons-material/Verified';
 import type { Action, Subject } from '@tiermode/shared-types';
 import type { NavEntry } from '@/components/layouts/app-shell';
 import type { AppAbility } from '@/lib/ability';
@@ -12,6 +14,18 @@ interface GuardedEntry extends NavEntry {
 /** Every page of the app; each feature that adds a page adds its entry here. */
 const ENTRIES: GuardedEntry[] = [
   { label: 'Start', to: '/', icon: <HomeIcon /> },
+  {
+    label: 'Analysis',
+    to: '/analysis',
+    icon: <StackedLineChartIcon />,
+    requires: ['create', 'Analysis'],
+  },
+  {
+    label: 'Verification',
+    to: '/verification',
+    icon: <VerifiedIcon />,
+    requires: ['read', 'Verification'],
+  },
   { label: 'People', to: '/users', icon: <GroupIcon />, requires: ['manage', 'User'] },
 ];
 

@@ -1,9 +1,11 @@
 import { createBrowserRouter, RouterProvider } from 'react-router';
 import { NotFound } from '@/components/errors/not-found';
+import { AnalysisRoute } from './routes/analysis';
 import { AppRoot } from './routes/app-root';
 import { HomeRoute } from './routes/home';
 import { SignInRoute } from './routes/sign-in';
 import { UsersRoute } from './routes/users';
+import { VerificationRoute } from './routes/verification';
 
 const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInRoute /> },
@@ -12,7 +14,9 @@ const router = createBrowserRouter([
     element: <AppRoot />,
     children: [
       { index: true, element: <HomeRoute /> },
+      { path: 'analysis', element: <AnalysisRoute /> },
       { path: 'users', element: <UsersRoute /> },
+      { path: 'verification', element: <VerificationRoute /> },
       { path: '*', element: <NotFound /> },
     ],
   },

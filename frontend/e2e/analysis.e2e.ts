@@ -1,0 +1,109 @@
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
+
+// An invented five-storey building, storey 1 first: label, height (m), mass (t), stiffness (kN/m).
+const PASTED = [
+  'Label\tHeight\tMass\tStiffness',
+  'L1\t4.0\t350\t520000',
+  'L2\t3.5\t340\t480000',
+  'L3\t3.5\t340\t450000',
+  'L4\t3.5\t330\t400000',
+  'Roof\t3.5\t260\t320000',
+].join('\n');
+
+const firstPeriod = async (page: Page) =>
+  page.getByRole('table', { name: 'Modes' }).locator('tbody tr').first().locator('td').nth(1).textContent();
+
+async function waitForResults(page: Page) {
+  await page.getByRole('progressbar', { name: 'Updating the results' }).waitFor({ state: 'detached' });
+}
+
+const storeyRow = (page: Page, text: string) =>
+  page.getByRole('grid', { name: 'Storey table' }).getByRole('row').filter({ hasText: text });
+
+async function editCell(page: Page, rowText: string, field: string, value: string) {
+  const cell = storeyRow(page, rowText).locator(`[data-field="${field}"]`);
+  await cell.dblclick();
+  const input = cell.locator('input');
+  await input.fill(value);
+  await input.press('Enter');
+}
+
+describe('The analysis page (designer)', () => {
+  let browser: Browser;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(() => browser?.close());
+
+  it('pastes and types a five-storey building, generates a spectrum, and switches units', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'designer');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Analysis' }).click();
+    await page.getByRole('table', { name: 'Modes' }).waitFor();
+    await waitForResults(page);
+
+    // Paste a block copied from a spreadsheet, replacing the starting building.
+    await page.getByRole('button', { name: 'Paste from a spreadsheet' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Paste storeys from a spreadsheet' });
+    await dialog.getByLabel('Pasted cells').fill(PASTED);
+    expect(await dialog.getByRole('status').textContent()).toContain('5 storey(s) read.');
+    await dialog.getByRole('button', { name: 'Replace the table' }).click();
+    await storeyRow(page, 'Roof').waitFor();
+    await waitForResults(page);
+    const pastedPeriod = await firstPeriod(page);
+    expect(await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').count()).toBe(5);
+    await screenshot(page, 'analysis-pasted');
+
+    // Type a bad value: the cell is flagged by storey, nothing else is lost, then fix it by typing.
+    await editCell(page, 'L3', 'mass', '-340');
+    const problems = page.getByRole('alert', { name: 'Storey table problems' });
+    await problems.waitFor();
+    expect(await problems.textContent()).toBe('Storey 3: mass must be a positive number');
+    expect(await firstPeriod(page)).toBe(pastedPeriod);
+    await screenshot(page, 'analysis-flagged-cell');
+    await editCell(page, 'L3', 'mass', '500');
+    await problems.waitFor({ state: 'detached' });
+    await expect.poll(() => firstPeriod(page), { timeout: 10_000 }).not.toBe(pastedPeriod);
+    await waitForResults(page);
+
+    // Generate the ASCE 7 two-period spectrum: SDS = 1.0 g, SD1 = 0.6 g, TL = 8 s.
+    const generator = page.getByRole('form', { name: 'Spectrum generator' });
+    await generator.getByRole('button', { name: 'Generate the table' }).click();
+    const points = page.getByRole('grid', { name: 'Spectrum points' });
+    await points.getByRole('row').filter({ hasText: '0.12' }).first().waitFor();
+    await waitForResults(page);
+    const sa = await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').first().locator('td').nth(6).textContent();
+    expect(Number(sa)).toBeGreaterThan(0);
+    await screenshot(page, 'analysis-generated-spectrum');
+
+    // US customary units and back: the same storey, shown in ft, kip of weight and kip/in.
+    await page.getByRole('button', { name: 'US (kip, ft, in)' }).click();
+    await page.getByRole('columnheader', { name: 'Seismic weight (kip)' }).waitFor();
+    const roofUs = storeyRow(page, 'Roof');
+    // 3.5 m = 11.48 ft; 260 t x g = 573.2 kip; 320,000 kN/m = 1,827 kip/in
+    expect(await roofUs.locator('[data-field="height"]').textContent()).toMatch(/^11\.48/);
+    expect(await roofUs.locator('[data-field="mass"]').textContent()).toMatch(/^573\.2/);
+    expect(await roofUs.locator('[data-field="stiffness"]').textContent()).toMatch(/^1,827/);
+    await screenshot(page, 'analysis-us-units');
+    await page.getByRole('button', { name: 'SI (t, kN, m)' }).click();
+    await page.getByRole('columnheader', { name: 'Mass (t)' }).waitFor();
+    const roofSi = storeyRow(page, 'Roof');
+    expect(await roofSi.locator('[data-field="mass"]').textContent()).toBe('260');
+    expect(await roofSi.locator('[data-field="stiffness"]').textContent()).toBe('320,000');
+    await close();
+  });
+
+  it('shows the reference cases on the Verification page, all passing', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'student');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Verification' }).click();
+    await page.getByRole('heading', { name: 'Two-storey frame, m1 = 2m, m2 = m, k1 = 2k, k2 = k' }).waitFor();
+    expect(await page.getByText('Fail', { exact: true }).count()).toBe(0);
+    expect(await page.getByText('Pass', { exact: true }).count()).toBeGreaterThan(5);
+    await screenshot(page, 'verification');
+    await close();
+  });
+});

@@ -1,0 +1,96 @@
+import DeleteIcon from '@mui/icons-material/Delete';
+import { Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid';
+import type { SpectrumInput, SpectrumInterpolation } from '@tiermode/shared-types';
+import { SpectrumChart } from './spectrum-chart';
+import { SpectrumGeneratorForm } from './spectrum-generator-form';
+
+interface SpectrumEditorProps {
+  spectrum: SpectrumInput;
+  modes: { number: number; period: number; sa: number }[];
+  onChange: (spectrum: SpectrumInput) => void;
+}
+
+type PointRow = { id: number; period: number; sa: number };
+
+/** The design spectrum: its point table, a generator that fills it, and its plot. */
+export function SpectrumEditor({ spectrum, modes, onChange }: SpectrumEditorProps) {
+  const rows: PointRow[] = spectrum.points.map((p, id) => ({ id, ...p }));
+  const setPoints = (points: SpectrumInput['points']) => onChange({ ...spectrum, points });
+  const columns: GridColDef<PointRow>[] = [
+    { field: 'period', headerName: 'Period T (s)', type: 'number', editable: true, flex: 1 },
+    { field: 'sa', headerName: 'Sa (g)', type: 'number', editable: true, flex: 1 },
+    {
+      field: 'actions',
+      type: 'actions',
+      width: 60,
+      getActions: ({ row }) => [
+        <GridActionsCellItem
+          key="delete"
+          icon={<DeleteIcon />}
+          label={`Delete point ${row.id + 1}`}
+          onClick={() => setPoints(spectrum.points.filter((_, i) => i !== row.id))}
+        />,
+      ],
+    },
+  ];
+  return (
+    <Stack spacing={2}>
+      <SpectrumGeneratorForm
+        onGenerated={(g) => onChange({ points: g.points, interpolation: g.interpolation })}
+      />
+      <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2}>
+        <Stack spacing={1} sx={{ width: { lg: 320 } }}>
+          <TextField
+            select
+            size="small"
+            label="Interpolation"
+            value={spectrum.interpolation ?? 'linear'}
+            onChange={(e) =>
+              onChange({ ...spectrum, interpolation: e.target.value as SpectrumInterpolation })
+            }
+          >
+            <MenuItem value="linear">Linear in T</MenuItem>
+            <MenuItem value="log-log">Log-log</MenuItem>
+          </TextField>
+          <Box sx={{ height: 300 }}>
+            <DataGrid
+              aria-label="Spectrum points"
+              rows={rows}
+              columns={columns}
+              density="compact"
+              disableColumnMenu
+              hideFooter={rows.length <= 100}
+              processRowUpdate={(row: PointRow) => {
+                setPoints(
+                  spectrum.points.map((p, i) =>
+                    i === row.id ? { period: Number(row.period), sa: Number(row.sa) } : p,
+                  ),
+                );
+                return row;
+              }}
+            />
+          </Box>
+          <Button
+            onClick={() => {
+              const last = spectrum.points[spectrum.points.length - 1];
+              setPoints([
+                ...spectrum.points,
+                { period: (last?.period ?? 0) + 1, sa: last?.sa ?? 0 },
+              ]);
+            }}
+          >
+            Add a point
+          </Button>
+          <Typography variant="caption" color="text.secondary">
+            Periods must increase down the table. Outside it the nearest end value is used, with a
+            warning.
+          </Typography>
+        </Stack>
+        <Box sx={{ flex: 1, minWidth: 0 }}>
+          <SpectrumChart spectrum={spectrum} modes={modes} />
+        </Box>
+      </Stack>
+    </Stack>
+  );
+}

@@ -1,0 +1,162 @@
+import AddIcon from '@mui/icons-material/Add';
+import ContentPasteIcon from '@mui/icons-material/ContentPaste';
+import DeleteIcon from '@mui/icons-material/Delete';
+import VerticalAlignBottomIcon from '@mui/icons-material/VerticalAlignBottom';
+import { Alert, Box, Button, Stack, Typography } from '@mui/material';
+import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid';
+import { useState } from 'react';
+import {
+  fromDisplay,
+  massHeader,
+  toDisplay,
+  unitLabel,
+  type Quantity,
+  type UnitSystem,
+} from '@/lib/units';
+import { newRowId, storeyProblems, type StoreyRow } from '../model/storey-rows';
+import { PasteDialog } from './paste-dialog';
+
+interface StoreyTableProps {
+  rows: StoreyRow[];
+  units: UnitSystem;
+  onChange: (rows: StoreyRow[]) => void;
+}
+
+type DisplayRow = StoreyRow & { number: number };
+
+const toNumber = (value: unknown) =>
+  typeof value === 'number' ? value : value === null || value === '' ? Number.NaN : Number(value);
+
+/** The storey table: storey 1 (at the base) first; values shown in the chosen units. */
+export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
+  const [pasting, setPasting] = useState(false);
+  const problems = storeyProblems(rows);
+  const invalid = new Set(problems.map((p) => `${p.rowId}:${p.field}`));
+
+  const numeric = (
+    field: 'height' | 'mass' | 'stiffness',
+    quantity: Quantity,
+    header: string,
+  ): GridColDef<DisplayRow> => ({
+    field,
+    headerName: header,
+    type: 'number',
+    editable: true,
+    flex: 1,
+    minWidth: 130,
+    valueGetter: (_value, row) =>
+      Number.isFinite(row[field])
+        ? Number(toDisplay(units, quantity, row[field]).toPrecision(10))
+        : null,
+    valueSetter: (value, row) => {
+      const shown = toNumber(value);
+      return {
+        ...row,
+        [field]: Number.isFinite(shown) ? fromDisplay(units, quantity, shown) : Number.NaN,
+      };
+    },
+    cellClassName: (params) => (invalid.has(`${params.row.id}:${field}`) ? 'cell-invalid' : ''),
+  });
+
+  const insertBelow = (index: number) => {
+    const template = rows[index] ?? rows[rows.length - 1];
+    const copy = { ...template, id: newRowId(), label: '' };
+    onChange([...rows.slice(0, index), copy, ...rows.slice(index)]);
+  };
+
+  const columns: GridColDef<DisplayRow>[] = [
+    { field: 'number', headerName: 'Storey', width: 80, type: 'number', sortable: false },
+    {
+      field: 'label',
+      headerName: 'Label',
+      editable: true,
+      flex: 1,
+      minWidth: 110,
+      sortable: false,
+    },
+    numeric('height', 'length', `Height (${unitLabel(units, 'length')})`),
+    numeric('mass', 'mass', massHeader(units)),
+    numeric('stiffness', 'stiffness', `Stiffness (${unitLabel(units, 'stiffness')})`),
+    {
+      field: 'actions',
+      type: 'actions',
+      headerName: 'Storey actions',
+      width: 110,
+      getActions: ({ row }) => [
+        <GridActionsCellItem
+          key="insert"
+          icon={<VerticalAlignBottomIcon />}
+          label={`Insert a storey below storey ${row.number}`}
+          onClick={() => insertBelow(row.number - 1)}
+        />,
+        <GridActionsCellItem
+          key="delete"
+          icon={<DeleteIcon />}
+          label={`Delete storey ${row.number}`}
+          disabled={rows.length === 1}
+          onClick={() => onChange(rows.filter((r) => r.id !== row.id))}
+        />,
+      ],
+    },
+  ];
+
+  return (
+    <Stack spacing={1}>
+      <Stack direction="row" spacing={1}>
+        <Button startIcon={<AddIcon />} onClick={() => insertBelow(rows.length)}>
+          Add a storey on top
+        </Button>
+        <Button startIcon={<ContentPasteIcon />} onClick={() => setPasting(true)}>
+          Paste from a spreadsheet
+        </Button>
+      </Stack>
+      <Box
+        sx={{
+          height: Math.min(460, 110 + rows.length * 52),
+          '& .cell-invalid': { bgcolor: 'error.light', color: 'error.contrastText' },
+        }}
+      >
+        <DataGrid
+          aria-label="Storey table"
+          rows={rows.map((row, i) => ({ ...row, number: i + 1 }))}
+          columns={columns}
+          hideFooter={rows.length <= 100}
+          disableColumnMenu
+          disableRowSelectionOnClick
+          processRowUpdate={(updated: DisplayRow) => {
+            const row: StoreyRow = {
+              id: updated.id,
+              label: updated.label,
+              height: updated.height,
+              mass: updated.mass,
+              stiffness: updated.stiffness,
+            };
+            onChange(rows.map((r) => (r.id === row.id ? row : r)));
+            return updated;
+          }}
+        />
+      </Box>
+      <Typography variant="caption" color="text.secondary">
+        Storey 1 is at the base and the roof is the last row. Each storey's mass is lumped at the
+        floor on top of it; its height and stiffness are those of the storey below that floor.
+      </Typography>
+      {problems.length > 0 && (
+        <Alert severity="error" role="alert" aria-label="Storey table problems">
+          {problems.map((p) => (
+            <div key={`${p.rowId}-${p.field}`}>{p.message}</div>
+          ))}
+        </Alert>
+      )}
+      {pasting && (
+        <PasteDialog
+          units={units}
+          onClose={() => setPasting(false)}
+          onApply={(pasted, mode) => {
+            onChange(mode === 'replace' ? pasted : [...rows, ...pasted]);
+            setPasting(false);
+          }}
+        />
+      )}
+    </Stack>
+  );
+}
