@@ -13,10 +13,18 @@ const PASTED = [
 ].join('\n');
 
 const firstPeriod = async (page: Page) =>
-  page.getByRole('table', { name: 'Modes' }).locator('tbody tr').first().locator('td').nth(1).textContent();
+  page
+    .getByRole('table', { name: 'Modes' })
+    .locator('tbody tr')
+    .first()
+    .locator('td')
+    .nth(1)
+    .textContent();
 
 async function waitForResults(page: Page) {
-  await page.getByRole('progressbar', { name: 'Updating the results' }).waitFor({ state: 'detached' });
+  await page
+    .getByRole('progressbar', { name: 'Updating the results' })
+    .waitFor({ state: 'detached' });
 }
 
 const storeyRow = (page: Page, text: string) =>
@@ -41,7 +49,10 @@ describe('The analysis page (designer)', () => {
   it('pastes and types a five-storey building, generates a spectrum, and switches units', async () => {
     const { page, close } = await newPage(browser);
     await signIn(page, 'designer');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Analysis' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Analysis' })
+      .click();
     await page.getByRole('table', { name: 'Modes' }).waitFor();
     await waitForResults(page);
 
@@ -75,7 +86,13 @@ describe('The analysis page (designer)', () => {
     const points = page.getByRole('grid', { name: 'Spectrum points' });
     await points.getByRole('row').filter({ hasText: '0.12' }).first().waitFor();
     await waitForResults(page);
-    const sa = await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').first().locator('td').nth(6).textContent();
+    const sa = await page
+      .getByRole('table', { name: 'Modes' })
+      .locator('tbody tr')
+      .first()
+      .locator('td')
+      .nth(6)
+      .textContent();
     expect(Number(sa)).toBeGreaterThan(0);
     await screenshot(page, 'analysis-generated-spectrum');
 
@@ -99,8 +116,13 @@ describe('The analysis page (designer)', () => {
   it('shows the reference cases on the Verification page, all passing', async () => {
     const { page, close } = await newPage(browser);
     await signIn(page, 'student');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Verification' }).click();
-    await page.getByRole('heading', { name: 'Two-storey frame, m1 = 2m, m2 = m, k1 = 2k, k2 = k' }).waitFor();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Verification' })
+      .click();
+    await page
+      .getByRole('heading', { name: 'Two-storey frame, m1 = 2m, m2 = m, k1 = 2k, k2 = k' })
+      .waitFor();
     expect(await page.getByText('Fail', { exact: true }).count()).toBe(0);
     expect(await page.getByText('Pass', { exact: true }).count()).toBeGreaterThan(5);
     await screenshot(page, 'verification');
