@@ -82,3 +82,63 @@ describe('POST /api/spectra/generate', () => {
     expect(res.body.message).toContain(message);
   });
 });
+
+describe('POST /api/analysis/column-stiffness', () => {
+  let app: INestApplication<App>;
+  let token: string;
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    token = await tokenFor(app, 'designer');
+  });
+  afterAll(() => app.close());
+
+  const post = (body: object) =>
+    request(app.getHttpServer())
+      .post('/api/analysis/column-stiffness')
+      .set('Authorization', `Bearer ${token}`)
+      .send(body);
+
+  it('sums c E I / h^3 over the column groups (c = 12 fixed-fixed, 3 fixed-pinned)', async () => {
+    // Hand-worked: 12 x 30e9 x 2.13333e-3 / 3.5^3 = 17,912,536 N/m per fixed-fixed column.
+    const i = 0.4 ** 4 / 12;
+    const res = await post({
+      height: 3.5,
+      columns: [
+        { elasticModulus: 30e9, secondMoment: i, count: 4, fixity: 'fixed-fixed' },
+        { elasticModulus: 30e9, secondMoment: i, count: 2, fixity: 'fixed-pinned' },
+      ],
+    }).expect(200);
+    expect(res.body.contributions[0]).toBeCloseTo(4 * 17_912_536.4, 0);
+    expect(res.body.contributions[1]).toBeCloseTo((2 * 17_912_536.4) / 4, 0);
+    expect(res.body.stiffness).toBeCloseTo(
+      res.body.contributions[0] + res.body.contributions[1],
+      6,
+    );
+  });
+
+  it.each([
+    [
+      {
+        height: 0,
+        columns: [{ elasticModulus: 1, secondMoment: 1, count: 1, fixity: 'fixed-fixed' }],
+      },
+      'height must be a positive number (m)',
+    ],
+    [{ height: 3, columns: [] }, 'columns must list at least one column group'],
+    [
+      { height: 3, columns: [{ elasticModulus: 1, secondMoment: 1, count: 1, fixity: 'hinged' }] },
+      'columns[0].fixity must be "fixed-fixed" or "fixed-pinned"',
+    ],
+    [
+      {
+        height: 3,
+        columns: [{ elasticModulus: -1, secondMoment: 1, count: 1, fixity: 'fixed-fixed' }],
+      },
+      'columns[0].elasticModulus must be a positive number (Pa)',
+    ],
+  ])('refuses %j naming the field', async (body, message) => {
+    const res = await post(body).expect(400);
+    expect(res.body.message).toContain(message);
+  });
+});

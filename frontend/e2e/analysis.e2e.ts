@@ -80,6 +80,24 @@ describe('The analysis page (designer)', () => {
     await expect.poll(() => firstPeriod(page), { timeout: 10_000 }).not.toBe(pastedPeriod);
     await waitForResults(page);
 
+    // Storey 1's stiffness from four 400 mm square columns fixed at both ends, E = 30 GPa, h = 4 m:
+    // I = 0.4^4 / 12 = 213,333 cm^4; k = 4 x 12 x 30e9 x 2.13333e-3 / 4^3 = 48,000 kN/m (by hand).
+    await storeyRow(page, 'L1')
+      .getByRole('button', { name: 'Stiffness of storey 1 from its columns' })
+      .click();
+    const columns = page.getByRole('dialog', { name: 'Stiffness of storey 1 from its columns' });
+    await columns.getByLabel('I (cm⁴)').fill('213333.3333');
+    await columns.getByRole('button', { name: 'Compute' }).click();
+    await columns.getByRole('status').waitFor();
+    expect(await columns.getByRole('status').textContent()).toContain('k = 48,000 kN/m');
+    await screenshot(page, 'analysis-column-stiffness');
+    await columns.getByRole('button', { name: 'Use this stiffness' }).click();
+    await columns.waitFor({ state: 'detached' });
+    expect(await storeyRow(page, 'L1').locator('[data-field="stiffness"]').textContent()).toBe(
+      '48,000',
+    );
+    await waitForResults(page);
+
     // Generate the ASCE 7 two-period spectrum: SDS = 1.0 g, SD1 = 0.6 g, TL = 8 s.
     const generator = page.getByRole('form', { name: 'Spectrum generator' });
     await generator.getByRole('button', { name: 'Generate the table' }).click();

@@ -160,3 +160,30 @@ export interface SpectrumGenerateResponse {
   /** The clause the table follows, as the software reads it. */
   basis: string;
 }
+
+/** `POST /api/analysis/column-stiffness`: a storey's lateral stiffness from its columns. */
+export type ColumnFixity = 'fixed-fixed' | 'fixed-pinned';
+
+export interface ColumnGroupInput {
+  /** Young's modulus E, Pa */
+  elasticModulus: number;
+  /** Second moment of area I about the bending axis, m^4 */
+  secondMoment: number;
+  /** How many such columns */
+  count: number;
+  /** Both ends fixed against rotation (c = 12) or one end pinned (c = 3). */
+  fixity: ColumnFixity;
+}
+
+export interface ColumnStiffnessRequest {
+  /** Storey height h, m */
+  height: number;
+  columns: ColumnGroupInput[];
+}
+
+export interface ColumnStiffnessResponse {
+  /** k = sum of c E I / h^3, N/m */
+  stiffness: number;
+  /** Each group's share, N/m, in the order given. */
+  contributions: number[];
+}

@@ -1,8 +1,9 @@
 import { Body, Controller, HttpCode, Post } from '@nestjs/common';
-import type { AnalysisResponse } from '@tiermode/shared-types';
+import type { AnalysisResponse, ColumnStiffnessResponse } from '@tiermode/shared-types';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
 import { AnalysisRequestDto } from './dto/analysis-request.dto';
+import { ColumnStiffnessDto } from './dto/column-stiffness.dto';
 
 /** The stateless analysis: any signed-in user; nothing is stored. */
 @Controller('analysis')
@@ -14,5 +15,13 @@ export class AnalysisController {
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   run(@Body() body: AnalysisRequestDto): AnalysisResponse {
     return this.analysis.analyse(body);
+  }
+
+  /** A storey's lateral stiffness from its columns, for the storey table's helper. */
+  @Post('column-stiffness')
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('create', 'Analysis'))
+  columnStiffness(@Body() body: ColumnStiffnessDto): ColumnStiffnessResponse {
+    return this.analysis.columnStiffness(body);
   }
 }

@@ -1,6 +1,12 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
-import type { AnalysisRequest, AnalysisResponse } from '@tiermode/shared-types';
+import type {
+  AnalysisRequest,
+  AnalysisResponse,
+  ColumnStiffnessRequest,
+  ColumnStiffnessResponse,
+} from '@tiermode/shared-types';
 import { analyse } from './engine/analyse';
+import { storeyStiffnessFromColumns } from './engine/column-stiffness';
 
 @Injectable()
 export class AnalysisService {
@@ -10,13 +16,30 @@ export class AnalysisService {
    * with a RangeError or TypeError that names the field; those are the caller's 400s.
    */
   analyse(request: AnalysisRequest): AnalysisResponse {
-    try {
-      return analyse(request);
-    } catch (error) {
-      if (error instanceof RangeError || error instanceof TypeError) {
-        throw new BadRequestException([error.message]);
-      }
-      throw error;
+    return asBadRequest(() => analyse(request));
+  }
+
+  columnStiffness(request: ColumnStiffnessRequest): ColumnStiffnessResponse {
+    return asBadRequest(() => {
+      const contributions = request.columns.map((group) =>
+        storeyStiffnessFromColumns([group], request.height),
+      );
+      return {
+        stiffness: storeyStiffnessFromColumns(request.columns, request.height),
+        contributions,
+      };
+    });
+  }
+}
+
+/** The engine's RangeError/TypeError name the field: they are the caller's 400s. */
+function asBadRequest<T>(run: () => T): T {
+  try {
+    return run();
+  } catch (error) {
+    if (error instanceof RangeError || error instanceof TypeError) {
+      throw new BadRequestException([error.message]);
     }
+    throw error;
   }
 }

@@ -26,6 +26,13 @@ describe('units', () => {
     expect(massHeader('SI')).toBe('Mass (t)');
   });
 
+  it('shows E in GPa or ksi and I in cm⁴ or in⁴ (1 in = 25.4 mm)', () => {
+    expect(toDisplay('SI', 'modulus', 30e9)).toBeCloseTo(30, 12);
+    expect(toDisplay('US', 'modulus', 200e9)).toBeCloseTo(29_007.5, 1); // 200 GPa = 29,008 ksi
+    expect(toDisplay('SI', 'secondMoment', 2.1333e-3)).toBeCloseTo(213_330, 6);
+    expect(fromDisplay('US', 'secondMoment', 1)).toBeCloseTo(0.0254 ** 4, 15);
+  });
+
   it('round-trips every quantity', () => {
     for (const system of ['SI', 'US'] as const) {
       for (const quantity of [

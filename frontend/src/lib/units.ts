@@ -7,11 +7,20 @@ import { createUnit, unit } from 'mathjs';
  * (mass = W / g), as US practice does.
  */
 export type UnitSystem = 'SI' | 'US';
-export type Quantity = 'length' | 'mass' | 'stiffness' | 'force' | 'moment' | 'displacement';
+export type Quantity =
+  | 'length'
+  | 'mass'
+  | 'stiffness'
+  | 'force'
+  | 'moment'
+  | 'displacement'
+  | 'modulus'
+  | 'secondMoment';
 
 // mathjs rounds the kip to 4448.2216 N; the international pound-force is exactly
 // 4.4482216152605 N (0.45359237 kg x 9.80665 m/s^2).
 createUnit('kip', '4448.2216152605 N', { override: true });
+createUnit('ksi', '1000 psi', { override: true });
 
 /** Standard gravity, m/s^2 (CGPM 1901), for weight <-> mass. */
 const G = 9.80665;
@@ -33,6 +42,9 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitSpec>> = {
     force: { unit: 'kN', label: 'kN' },
     moment: { unit: 'kN m', label: 'kN·m' },
     displacement: { unit: 'mm', label: 'mm' },
+    // Steel section tables give I in cm^4.
+    modulus: { unit: 'GPa', label: 'GPa' },
+    secondMoment: { unit: 'cm^4', label: 'cm⁴' },
   },
   US: {
     length: { unit: 'ft', label: 'ft' },
@@ -41,6 +53,8 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitSpec>> = {
     force: { unit: 'kip', label: 'kip' },
     moment: { unit: 'kip ft', label: 'kip·ft' },
     displacement: { unit: 'in', label: 'in' },
+    modulus: { unit: 'ksi', label: 'ksi' },
+    secondMoment: { unit: 'in^4', label: 'in⁴' },
   },
 };
 
@@ -51,6 +65,8 @@ const SI_BASE: Record<Quantity, string> = {
   force: 'N',
   moment: 'N m',
   displacement: 'm',
+  modulus: 'Pa',
+  secondMoment: 'm^4',
 };
 
 /** The label of a quantity's display unit, for column headers and axes. */

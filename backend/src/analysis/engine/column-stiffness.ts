@@ -1,15 +1,7 @@
-/** End fixity of a column against rotation. */
-export type ColumnFixity = 'fixed-fixed' | 'fixed-pinned';
+import type { ColumnFixity, ColumnGroupInput } from '@tiermode/shared-types';
 
-export interface ColumnGroup {
-  /** Young's modulus, Pa */
-  elasticModulus: number;
-  /** Second moment of area about the bending axis, m^4 */
-  secondMoment: number;
-  /** How many such columns the storey has */
-  count: number;
-  fixity: ColumnFixity;
-}
+/** A group of identical columns of a storey (E in Pa, I in m^4). */
+export type ColumnGroup = ColumnGroupInput;
 
 /** c in k = c E I / h^3: 12 with both ends fixed against rotation, 3 with one end pinned. */
 export const FIXITY_COEFFICIENT: Readonly<Record<ColumnFixity, number>> = {

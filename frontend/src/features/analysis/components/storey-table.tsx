@@ -1,5 +1,6 @@
 import AddIcon from '@mui/icons-material/Add';
 import ContentPasteIcon from '@mui/icons-material/ContentPaste';
+import CalculateIcon from '@mui/icons-material/Calculate';
 import DeleteIcon from '@mui/icons-material/Delete';
 import VerticalAlignBottomIcon from '@mui/icons-material/VerticalAlignBottom';
 import { Alert, Box, Button, Stack, Typography } from '@mui/material';
@@ -14,6 +15,7 @@ import {
   type UnitSystem,
 } from '@/lib/units';
 import { newRowId, storeyProblems, type StoreyRow } from '../model/storey-rows';
+import { ColumnStiffnessDialog } from './column-stiffness-dialog';
 import { PasteDialog } from './paste-dialog';
 
 interface StoreyTableProps {
@@ -30,6 +32,7 @@ const toNumber = (value: unknown) =>
 /** The storey table: storey 1 (at the base) first; values shown in the chosen units. */
 export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
   const [pasting, setPasting] = useState(false);
+  const [columnsFor, setColumnsFor] = useState<number | null>(null);
   const problems = storeyProblems(rows);
   const invalid = new Set(problems.map((p) => `${p.rowId}:${p.field}`));
 
@@ -81,8 +84,15 @@ export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
       field: 'actions',
       type: 'actions',
       headerName: 'Storey actions',
-      width: 110,
+      width: 140,
       getActions: ({ row }) => [
+        <GridActionsCellItem
+          key="columns"
+          icon={<CalculateIcon />}
+          label={`Stiffness of storey ${row.number} from its columns`}
+          disabled={!(row.height > 0)}
+          onClick={() => setColumnsFor(row.number - 1)}
+        />,
         <GridActionsCellItem
           key="insert"
           icon={<VerticalAlignBottomIcon />}
@@ -146,6 +156,18 @@ export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
             <div key={`${p.rowId}-${p.field}`}>{p.message}</div>
           ))}
         </Alert>
+      )}
+      {columnsFor !== null && rows[columnsFor] && (
+        <ColumnStiffnessDialog
+          storeyNumber={columnsFor + 1}
+          height={rows[columnsFor].height}
+          units={units}
+          onClose={() => setColumnsFor(null)}
+          onApply={(stiffness) => {
+            onChange(rows.map((r, i) => (i === columnsFor ? { ...r, stiffness } : r)));
+            setColumnsFor(null);
+          }}
+        />
       )}
       {pasting && (
         <PasteDialog
