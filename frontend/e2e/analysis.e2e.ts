@@ -68,6 +68,23 @@ describe('The analysis page (designer)', () => {
     expect(await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').count()).toBe(5);
     await screenshot(page, 'analysis-pasted');
 
+    // Add a storey on top by typing its label, then take it away again.
+    await page.getByRole('button', { name: 'Add a storey on top' }).click();
+    const sixth = page.getByRole('grid', { name: 'Storey table' }).locator('[data-rowindex="5"]');
+    await sixth.waitFor();
+    const labelCell = sixth.locator('[data-field="label"]');
+    await labelCell.dblclick();
+    await labelCell.locator('input').fill('Plant room');
+    await labelCell.locator('input').press('Enter');
+    await storeyRow(page, 'Plant room').waitFor();
+    await waitForResults(page);
+    expect(await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').count()).toBe(6);
+    await storeyRow(page, 'Plant room').getByRole('button', { name: 'Delete storey 6' }).click();
+    await storeyRow(page, 'Plant room').waitFor({ state: 'detached' });
+    await waitForResults(page);
+    expect(await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').count()).toBe(5);
+    expect(await firstPeriod(page)).toBe(pastedPeriod);
+
     // Type a bad value: the cell is flagged by storey, nothing else is lost, then fix it by typing.
     await editCell(page, 'L3', 'mass', '-340');
     const problems = page.getByRole('alert', { name: 'Storey table problems' });
