@@ -13,6 +13,7 @@ import { loadEnvironment } from './config/environment';
 import { FRONTEND_DIST } from './config/paths';
 import { DatabaseModule } from './database/database.module';
 import { HealthModule } from './health/health.module';
+import { ProjectsModule } from './projects/projects.module';
 import { UsersModule } from './users/users.module';
 import { VerificationModule } from './verification/verification.module';
 
@@ -28,6 +29,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     AuthorizationModule,
     AuthModule,
     UsersModule,
+    ProjectsModule,
     AnalysisModule,
     VerificationModule,
     HealthModule,

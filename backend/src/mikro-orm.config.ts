@@ -2,6 +2,7 @@ import { defineConfig } from '@mikro-orm/sqlite';
 import { Migrator } from '@mikro-orm/migrations';
 import { loadEnvironment } from './config/environment';
 import { MIGRATIONS } from './migrations';
+import { Project } from './projects/project.entity';
 import { User } from './users/user.entity';
 
 type Sqlite3Connection = { exec(sql: string, callback: (error: Error | null) => void): void };
@@ -21,7 +22,7 @@ const CONNECTION_PRAGMAS = [
 export function createOrmConfig(databasePath: string) {
   return defineConfig({
     dbName: databasePath,
-    entities: [User],
+    entities: [User, Project],
     extensions: [Migrator],
     // Schema changes go through committed migrations only.
     ensureDatabase: false,

@@ -4,3 +4,4 @@ export * from './users';
 export * from './auth';
 export * from './http';
 export * from './analysis';
+export * from './projects';

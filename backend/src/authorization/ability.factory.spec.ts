@@ -64,6 +64,20 @@ describe('AbilityFactory', () => {
     expect(lapsed.can('lock', 'Calculation')).toBe(false);
   });
 
+  it('lets a designer edit only projects it is a member of', () => {
+    const designer = factory.createForUser(user('designer'), today);
+    expect(
+      designer.can('update', subject('Project', { id: 'p1', memberIds: ['designer-1'] })),
+    ).toBe(true);
+    expect(designer.can('update', subject('Project', { id: 'p2', memberIds: ['someone'] }))).toBe(
+      false,
+    );
+    expect(designer.can('read', subject('Project', { id: 'p2', memberIds: ['someone'] }))).toBe(
+      true,
+    );
+    expect(factory.createForUser(user('student'), today).can('read', 'Project')).toBe(false);
+  });
+
   it('lets a student read only locked and superseded calcs', () => {
     const student = factory.createForUser(user('student'), today);
     const calc = (status: string) => subject('Calculation', { status }) as never;

@@ -24,6 +24,7 @@ export class AbilityFactory {
     switch (user.role) {
       case 'admin':
         can('manage', 'User');
+        can('read', 'Project');
         // An admin may not deactivate or demote itself: that could lock the firm out.
         cannot('update', 'User', ['active', 'role'], { id: user.id }).because(
           'You cannot deactivate your own account or change your own role',
@@ -32,7 +33,9 @@ export class AbilityFactory {
         break;
       case 'designer':
         can('create', 'Project');
+        // Every project is readable; only its members edit it (memberIds holds the caller).
         can('read', 'Project');
+        can(['update', 'delete'], 'Project', { memberIds: user.id });
         can('read', 'Calculation');
         break;
       case 'reviewer':

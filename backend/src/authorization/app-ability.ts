@@ -2,7 +2,13 @@ import type { MongoAbility, MongoQuery } from '@casl/ability';
 import type { Action, Subject } from '@tiermode/shared-types';
 import type { User } from '../users/user.entity';
 
+/** The plain record a project's rules are checked against (see projects/project.mapper.ts). */
+export interface ProjectRecord {
+  id: string;
+  memberIds: string[];
+}
+
 /** What a rule may be checked against: a subject name, or a record tagged with `subject()`. */
-type SubjectRecords = { User: User };
+type SubjectRecords = { User: User; Project: ProjectRecord };
 export type AppSubject = Subject | SubjectRecords[keyof SubjectRecords];
 export type AppAbility = MongoAbility<[Action, AppSubject], MongoQuery>;

@@ -1,0 +1,59 @@
+import type { CreateProjectRequest, UpdateProjectRequest } from '@tiermode/shared-types';
+import { Transform } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsString,
+  IsUUID,
+  MaxLength,
+  Min,
+  ValidateIf,
+} from 'class-validator';
+
+const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
+
+export class CreateProjectDto implements CreateProjectRequest {
+  @Transform(trim)
+  @IsString({ message: 'name must be a string' })
+  @IsNotEmpty({ message: 'name must not be empty' })
+  @MaxLength(200, { message: 'name must be at most 200 characters' })
+  name!: string;
+
+  @IsOptional()
+  @Transform(trim)
+  @IsString({ message: 'site must be a string' })
+  @MaxLength(1000, { message: 'site must be at most 1000 characters' })
+  site?: string;
+}
+
+export class UpdateProjectDto implements UpdateProjectRequest {
+  @IsOptional()
+  @IsInt({ message: 'version must be an integer' })
+  @Min(1, { message: 'version must be at least 1' })
+  version?: number;
+
+  @IsOptional()
+  @Transform(trim)
+  @IsString({ message: 'name must be a string' })
+  @IsNotEmpty({ message: 'name must not be empty' })
+  @MaxLength(200, { message: 'name must be at most 200 characters' })
+  name?: string;
+
+  @IsOptional()
+  @Transform(trim)
+  @ValidateIf((_, value) => value !== null)
+  @IsString({ message: 'site must be a string' })
+  @MaxLength(1000, { message: 'site must be at most 1000 characters' })
+  site?: string | null;
+
+  @IsOptional()
+  @IsArray({ message: 'memberIds must be a list of user ids' })
+  @ArrayMinSize(1, { message: 'memberIds must list at least one designer' })
+  @ArrayMaxSize(200, { message: 'memberIds must list at most 200 designers' })
+  @IsUUID('all', { each: true, message: 'memberIds must hold user ids (UUIDs)' })
+  memberIds?: string[];
+}

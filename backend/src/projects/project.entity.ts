@@ -1,0 +1,42 @@
+import { randomUUID } from 'node:crypto';
+import {
+  Collection,
+  Entity,
+  ManyToMany,
+  ManyToOne,
+  OptionalProps,
+  PrimaryKey,
+  Property,
+} from '@mikro-orm/core';
+import { User } from '../users/user.entity';
+
+@Entity({ tableName: 'projects' })
+export class Project {
+  [OptionalProps]?: 'site' | 'createdAt' | 'updatedAt' | 'version';
+
+  @PrimaryKey({ type: 'uuid' })
+  id: string = randomUUID();
+
+  @Property({ type: 'string', length: 200 })
+  name!: string;
+
+  /** A description of the site (invented in the demo). */
+  @Property({ type: 'string', length: 1000, nullable: true })
+  site: string | null = null;
+
+  @ManyToOne(() => User)
+  createdBy!: User;
+
+  /** Designers who may edit the project and its drafts. */
+  @ManyToMany({ entity: () => User, pivotTable: 'project_members' })
+  members = new Collection<User>(this);
+
+  @Property({ type: 'datetime' })
+  createdAt: Date = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Date = new Date();
+
+  @Property({ type: 'integer', version: true })
+  version!: number;
+}
