@@ -6,6 +6,7 @@ import { APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { AnalysisModule } from './analysis/analysis.module';
 import { AuthModule } from './auth/auth.module';
+import { CalculationsModule } from './calculations/calculations.module';
 import { JwtAuthGuard } from './auth/jwt-auth.guard';
 import { AuthorizationModule } from './authorization/authorization.module';
 import { PoliciesGuard } from './authorization/policies.guard';
@@ -30,6 +31,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     AuthModule,
     UsersModule,
     ProjectsModule,
+    CalculationsModule,
     AnalysisModule,
     VerificationModule,
     HealthModule,

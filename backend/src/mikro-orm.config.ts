@@ -2,6 +2,7 @@ import { defineConfig } from '@mikro-orm/sqlite';
 import { Migrator } from '@mikro-orm/migrations';
 import { loadEnvironment } from './config/environment';
 import { MIGRATIONS } from './migrations';
+import { Calculation } from './calculations/calculation.entity';
 import { Project } from './projects/project.entity';
 import { User } from './users/user.entity';
 
@@ -22,7 +23,7 @@ const CONNECTION_PRAGMAS = [
 export function createOrmConfig(databasePath: string) {
   return defineConfig({
     dbName: databasePath,
-    entities: [User, Project],
+    entities: [User, Project, Calculation],
     extensions: [Migrator],
     // Schema changes go through committed migrations only.
     ensureDatabase: false,

@@ -5,3 +5,4 @@ export * from './auth';
 export * from './http';
 export * from './analysis';
 export * from './projects';
+export * from './calculations';

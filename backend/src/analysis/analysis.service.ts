@@ -5,7 +5,7 @@ import type {
   ColumnStiffnessRequest,
   ColumnStiffnessResponse,
 } from '@tiermode/shared-types';
-import { analyse } from './engine/analyse';
+import { analyse, assertAnalysisRequest } from './engine/analyse';
 import { storeyStiffnessFromColumns } from './engine/column-stiffness';
 
 @Injectable()
@@ -17,6 +17,21 @@ export class AnalysisService {
    */
   analyse(request: AnalysisRequest): AnalysisResponse {
     return asBadRequest(() => analyse(request));
+  }
+
+  /**
+   * Refuses inputs the engine could not analyse, with the field named; `path` is where the inputs
+   * sit in the request body (e.g. "inputs." for a saved calculation).
+   */
+  validate(request: AnalysisRequest, path = ''): void {
+    try {
+      assertAnalysisRequest(request);
+    } catch (error) {
+      if (error instanceof RangeError || error instanceof TypeError) {
+        throw new BadRequestException([`${path}${error.message}`]);
+      }
+      throw error;
+    }
   }
 
   columnStiffness(request: ColumnStiffnessRequest): ColumnStiffnessResponse {

@@ -30,6 +30,7 @@ export class AbilityFactory {
           'You cannot deactivate your own account or change your own role',
         );
         can('read', 'Outbox');
+        can('read', 'Calculation');
         break;
       case 'designer':
         can('create', 'Project');
@@ -37,6 +38,9 @@ export class AbilityFactory {
         can('read', 'Project');
         can(['update', 'delete'], 'Project', { memberIds: user.id });
         can('read', 'Calculation');
+        // Drafts in the designer's own projects: create, edit and analyse.
+        can('create', 'Calculation', { projectMemberIds: user.id });
+        can(['update', 'analyse'], 'Calculation', { projectMemberIds: user.id, status: 'draft' });
         break;
       case 'reviewer':
         can('read', 'Project');

@@ -8,7 +8,15 @@ export interface ProjectRecord {
   memberIds: string[];
 }
 
+/** The plain record a calculation's rules are checked against (calculations/calculation.mapper.ts). */
+export interface CalculationRecord {
+  id: string;
+  status: string;
+  authorId: string;
+  projectMemberIds: string[];
+}
+
 /** What a rule may be checked against: a subject name, or a record tagged with `subject()`. */
-type SubjectRecords = { User: User; Project: ProjectRecord };
+type SubjectRecords = { User: User; Project: ProjectRecord; Calculation: CalculationRecord };
 export type AppSubject = Subject | SubjectRecords[keyof SubjectRecords];
 export type AppAbility = MongoAbility<[Action, AppSubject], MongoQuery>;

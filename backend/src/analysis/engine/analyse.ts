@@ -21,15 +21,11 @@ export const MIN_CUMULATIVE_MASS_RATIO = 0.9;
 export const CLOSE_MODE_PERIOD_RATIO = 0.9;
 
 /**
- * The whole modal response spectrum analysis of a shear building: modes, spectral values,
- * modal maxima, and their SRSS, CQC and ABS combinations (method.md). Pure: the input is not
- * changed. Throws TypeError/RangeError naming the field when the input is not valid.
- * `solveModes` is the eigensolution; the benchmark swaps in a general dense solver to compare.
+ * Checks everything about the inputs that can be checked before solving: the storeys, the
+ * spectrum table, the damping ratio and the interpolation. The mode selection is checked against
+ * the number of modes when the analysis runs. Throws TypeError/RangeError naming the field.
  */
-export function analyse(
-  request: AnalysisRequest,
-  solveModes: (storeys: readonly Storey[]) => Mode[] = naturalModes,
-): AnalysisResponse {
+export function assertAnalysisRequest(request: AnalysisRequest): void {
   const { storeys, spectrum, dampingRatio } = request;
   assertStoreys(storeys);
   assertSpectrum(spectrum?.points);
@@ -40,7 +36,26 @@ export function analyse(
   if (interpolation !== 'linear' && interpolation !== 'log-log') {
     throw new RangeError('spectrum.interpolation must be "linear" or "log-log"');
   }
+  if (request.modeCount !== undefined && request.modeCount > storeys.length) {
+    throw new RangeError(
+      `modeCount must be a whole number from 1 to ${storeys.length} (the number of storeys)`,
+    );
+  }
+}
 
+/**
+ * The whole modal response spectrum analysis of a shear building: modes, spectral values,
+ * modal maxima, and their SRSS, CQC and ABS combinations (method.md). Pure: the input is not
+ * changed. Throws TypeError/RangeError naming the field when the input is not valid.
+ * `solveModes` is the eigensolution; the benchmark swaps in a general dense solver to compare.
+ */
+export function analyse(
+  request: AnalysisRequest,
+  solveModes: (storeys: readonly Storey[]) => Mode[] = naturalModes,
+): AnalysisResponse {
+  assertAnalysisRequest(request);
+  const { storeys, spectrum, dampingRatio } = request;
+  const interpolation = spectrum.interpolation ?? 'linear';
   const allModes = solveModes(storeys);
   const used = allModes.slice(
     0,

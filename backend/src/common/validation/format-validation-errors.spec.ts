@@ -34,6 +34,21 @@ describe('formatValidationErrors', () => {
     ]);
   });
 
+  it('names the storey inside a nested inputs object too', () => {
+    const tree = [
+      error('inputs', undefined, [
+        error('storeys', undefined, [
+          error('1', undefined, [
+            error('height', { isPositive: 'height must be a positive number' }),
+          ]),
+        ]),
+      ]),
+    ];
+    expect(formatValidationErrors(tree)).toEqual([
+      'inputs.storeys[1].height (storey 2) must be a positive number',
+    ]);
+  });
+
   it('rewrites whitelist refusals with the path', () => {
     const tree = [
       error('storeys', undefined, [

@@ -2,8 +2,8 @@ import type { ValidationError } from 'class-validator';
 
 /** Paths whose array items are told by their number on screen as well as by their index. */
 const ITEM_NAMES: [RegExp, string][] = [
-  [/^storeys\[(\d+)\]/, 'storey'],
-  [/^spectrum\.points\[(\d+)\]/, 'point'],
+  [/(?:^|\.)storeys\[(\d+)\]/, 'storey'],
+  [/(?:^|\.)spectrum\.points\[(\d+)\]/, 'point'],
 ];
 
 /**

@@ -1,0 +1,35 @@
+import type { CalculationDto } from '@tiermode/shared-types';
+import type { CalculationRecord } from '../authorization/app-ability';
+import { projectSubject } from '../projects/project.mapper';
+import type { Calculation } from './calculation.entity';
+
+/** The calculation as responses show it; its project's members and its author must be loaded. */
+export function toCalculationDto(calc: Calculation): CalculationDto {
+  return {
+    id: calc.id,
+    projectId: calc.project.id,
+    title: calc.title,
+    revision: calc.revision,
+    status: calc.status,
+    inputs: calc.inputs,
+    analysis: calc.analysis,
+    engineVersion: calc.engineVersion,
+    inputsChangedAt: calc.inputsChangedAt.toISOString(),
+    analysedAt: calc.analysedAt?.toISOString() ?? null,
+    analysisStale: calc.analysedAt === null || calc.analysedAt < calc.inputsChangedAt,
+    author: { id: calc.author.id, name: calc.author.name },
+    createdAt: calc.createdAt.toISOString(),
+    updatedAt: calc.updatedAt.toISOString(),
+    version: calc.version,
+  };
+}
+
+/** The plain record CASL's conditions are checked against. */
+export function calculationSubject(calc: Calculation): CalculationRecord {
+  return {
+    id: calc.id,
+    status: calc.status,
+    authorId: calc.author.id,
+    projectMemberIds: projectSubject(calc.project).memberIds,
+  };
+}

@@ -1,0 +1,63 @@
+import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import type { AnalysisResponse, CalculationDto } from '@tiermode/shared-types';
+import type { AppAbility } from '../authorization/app-ability';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';
+import { UuidParam } from '../common/pipes/uuid-param.pipe';
+import type { User } from '../users/user.entity';
+import { CalculationsService } from './calculations.service';
+import { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
+
+@Controller()
+export class CalculationsController {
+  constructor(private readonly calculations: CalculationsService) {}
+
+  @Get('projects/:id/calculations')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  list(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) projectId: string,
+  ): Promise<CalculationDto[]> {
+    return this.calculations.listForProject(ability, projectId);
+  }
+
+  @Post('projects/:id/calculations')
+  @CheckPolicies((ability) => ability.can('create', 'Calculation'))
+  create(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) projectId: string,
+    @Body() body: CreateCalculationDto,
+  ): Promise<CalculationDto> {
+    return this.calculations.create(ability, user, projectId, body);
+  }
+
+  @Get('calculations/:id')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  get(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<CalculationDto> {
+    return this.calculations.get(ability, id);
+  }
+
+  @Patch('calculations/:id')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  update(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+    @Body() body: UpdateCalculationDto,
+  ): Promise<CalculationDto> {
+    return this.calculations.update(ability, id, body);
+  }
+
+  @Post('calculations/:id/analyse')
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  analyse(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<AnalysisResponse> {
+    return this.calculations.analyse(ability, id);
+  }
+}

@@ -1,0 +1,13 @@
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { Module } from '@nestjs/common';
+import { AnalysisModule } from '../analysis/analysis.module';
+import { Calculation } from './calculation.entity';
+import { CalculationsController } from './calculations.controller';
+import { CalculationsService } from './calculations.service';
+
+@Module({
+  imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule],
+  controllers: [CalculationsController],
+  providers: [CalculationsService],
+})
+export class CalculationsModule {}

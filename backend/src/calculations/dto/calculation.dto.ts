@@ -1,0 +1,49 @@
+import type { CreateCalculationRequest, UpdateCalculationRequest } from '@tiermode/shared-types';
+import { Transform, Type } from 'class-transformer';
+import {
+  IsDefined,
+  IsInt,
+  IsNotEmpty,
+  IsObject,
+  IsOptional,
+  IsString,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { AnalysisRequestDto } from '../../analysis/dto/analysis-request.dto';
+
+const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
+
+export class CreateCalculationDto implements CreateCalculationRequest {
+  @Transform(trim)
+  @IsString({ message: 'title must be a string' })
+  @IsNotEmpty({ message: 'title must not be empty' })
+  @MaxLength(200, { message: 'title must be at most 200 characters' })
+  title!: string;
+
+  @IsDefined({ message: 'inputs must be given' })
+  @IsObject({ message: 'inputs must be an object { storeys, spectrum, dampingRatio }' })
+  @ValidateNested()
+  @Type(() => AnalysisRequestDto)
+  inputs!: AnalysisRequestDto;
+}
+
+export class UpdateCalculationDto implements UpdateCalculationRequest {
+  @IsInt({ message: 'version must be the integer version the calculation was read at' })
+  @Min(1, { message: 'version must be at least 1' })
+  version!: number;
+
+  @IsOptional()
+  @Transform(trim)
+  @IsString({ message: 'title must be a string' })
+  @IsNotEmpty({ message: 'title must not be empty' })
+  @MaxLength(200, { message: 'title must be at most 200 characters' })
+  title?: string;
+
+  @IsOptional()
+  @IsObject({ message: 'inputs must be an object { storeys, spectrum, dampingRatio }' })
+  @ValidateNested()
+  @Type(() => AnalysisRequestDto)
+  inputs?: AnalysisRequestDto;
+}
