@@ -3,6 +3,8 @@ import { Migrator } from '@mikro-orm/migrations';
 import { loadEnvironment } from './config/environment';
 import { MIGRATIONS } from './migrations';
 import { Calculation } from './calculations/calculation.entity';
+import { LockedCalculationSubscriber } from './calculations/locked-calculation.subscriber';
+import { ReviewComment } from './calculations/review-comment.entity';
 import { Project } from './projects/project.entity';
 import { User } from './users/user.entity';
 
@@ -23,7 +25,8 @@ const CONNECTION_PRAGMAS = [
 export function createOrmConfig(databasePath: string) {
   return defineConfig({
     dbName: databasePath,
-    entities: [User, Project, Calculation],
+    entities: [User, Project, Calculation, ReviewComment],
+    subscribers: [new LockedCalculationSubscriber()],
     extensions: [Migrator],
     // Schema changes go through committed migrations only.
     ensureDatabase: false,

@@ -23,6 +23,15 @@ export interface CalculationDto {
   /** True when the inputs changed after the stored analysis was made. */
   analysisStale: boolean;
   author: { id: string; name: string };
+  reviewer: { id: string; name: string } | null;
+  submittedAt: string | null;
+  returnedAt: string | null;
+  lockedAt: string | null;
+  /** Present once locked. */
+  seal: SealDto | null;
+  /** The revision this one was revised from. */
+  previousRevisionId: string | null;
+  comments: ReviewCommentDto[];
   createdAt: string;
   updatedAt: string;
   /** Optimistic-lock version; a PATCH carries the version it was read at. */
@@ -40,4 +49,43 @@ export interface UpdateCalculationRequest {
   version: number;
   title?: string;
   inputs?: CalculationInputs;
+}
+
+/** The record a lock seals: who accepted the calc, under which licence, when, and the hash. */
+export interface SealDto {
+  /** SHA-256 (hex) of the RFC 8785 canonical JSON of the sealed content. */
+  hash: string;
+  reviewerId: string;
+  reviewerName: string;
+  licenseNumber: string;
+  licenseJurisdiction: string;
+  statement: string;
+  /** ISO time of the lock. */
+  lockedAt: string;
+}
+
+/** `GET /api/calculations/:id/seal`: the stored hash and the one recomputed from what is stored. */
+export interface SealCheckResponse {
+  valid: boolean;
+  hash: string;
+  recomputed: string;
+  seal: SealDto;
+}
+
+/** `POST /api/calculations/:id/return`. */
+export interface ReturnCalculationRequest {
+  comment: string;
+}
+
+/** `POST /api/calculations/:id/lock`. */
+export interface LockCalculationRequest {
+  /** The reviewer's statement of acceptance, sealed with the calc. */
+  statement: string;
+}
+
+export interface ReviewCommentDto {
+  id: string;
+  author: { id: string; name: string };
+  body: string;
+  createdAt: string;
 }

@@ -40,7 +40,11 @@ export class AbilityFactory {
         can('read', 'Calculation');
         // Drafts in the designer's own projects: create, edit and analyse.
         can('create', 'Calculation', { projectMemberIds: user.id });
-        can(['update', 'analyse'], 'Calculation', { projectMemberIds: user.id, status: 'draft' });
+        can(['update', 'analyse', 'submit'], 'Calculation', {
+          projectMemberIds: user.id,
+          status: 'draft',
+        });
+        can('revise', 'Calculation', { projectMemberIds: user.id, status: 'locked' });
         break;
       case 'reviewer':
         can('read', 'Project');

@@ -1,13 +1,24 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, Enum, ManyToOne, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import {
+  Collection,
+  Entity,
+  Enum,
+  ManyToOne,
+  OneToMany,
+  OptionalProps,
+  PrimaryKey,
+  Property,
+} from '@mikro-orm/core';
 import {
   CALCULATION_STATUSES,
   type AnalysisResponse,
   type CalculationInputs,
   type CalculationStatus,
+  type SealDto,
 } from '@tiermode/shared-types';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
+import { ReviewComment } from './review-comment.entity';
 
 @Entity({ tableName: 'calculations' })
 export class Calculation {
@@ -18,6 +29,12 @@ export class Calculation {
     | 'engineVersion'
     | 'analysedAt'
     | 'inputsChangedAt'
+    | 'reviewer'
+    | 'submittedAt'
+    | 'returnedAt'
+    | 'lockedAt'
+    | 'seal'
+    | 'previousRevision'
     | 'createdAt'
     | 'updatedAt'
     | 'version';
@@ -56,6 +73,32 @@ export class Calculation {
 
   @ManyToOne(() => User)
   author!: User;
+
+  /** The reviewer who last returned or locked it. */
+  @ManyToOne(() => User, { nullable: true })
+  reviewer: User | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  submittedAt: Date | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  returnedAt: Date | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  lockedAt: Date | null = null;
+
+  /** Set once, by the lock; never changed after. */
+  @Property({ type: 'json', nullable: true })
+  seal: SealDto | null = null;
+
+  /** The locked revision this draft was revised from. */
+  @ManyToOne(() => Calculation, { nullable: true })
+  previousRevision: Calculation | null = null;
+
+  @OneToMany(() => ReviewComment, (comment) => comment.calculation, {
+    orderBy: { createdAt: 'asc' },
+  })
+  comments = new Collection<ReviewComment>(this);
 
   @Property({ type: 'datetime' })
   createdAt: Date = new Date();

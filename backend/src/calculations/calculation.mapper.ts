@@ -3,7 +3,10 @@ import type { CalculationRecord } from '../authorization/app-ability';
 import { projectSubject } from '../projects/project.mapper';
 import type { Calculation } from './calculation.entity';
 
-/** The calculation as responses show it; its project's members and its author must be loaded. */
+/**
+ * The calculation as responses show it; its project's members, author, reviewer and comments
+ * (with their authors) must be loaded.
+ */
 export function toCalculationDto(calc: Calculation): CalculationDto {
   return {
     id: calc.id,
@@ -18,6 +21,20 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     analysedAt: calc.analysedAt?.toISOString() ?? null,
     analysisStale: calc.analysedAt === null || calc.analysedAt < calc.inputsChangedAt,
     author: { id: calc.author.id, name: calc.author.name },
+    reviewer: calc.reviewer ? { id: calc.reviewer.id, name: calc.reviewer.name } : null,
+    submittedAt: calc.submittedAt?.toISOString() ?? null,
+    returnedAt: calc.returnedAt?.toISOString() ?? null,
+    lockedAt: calc.lockedAt?.toISOString() ?? null,
+    seal: calc.seal,
+    previousRevisionId: calc.previousRevision?.id ?? null,
+    comments: calc.comments.isInitialized()
+      ? calc.comments.getItems().map((c) => ({
+          id: c.id,
+          author: { id: c.author.id, name: c.author.name },
+          body: c.body,
+          createdAt: c.createdAt.toISOString(),
+        }))
+      : [],
     createdAt: calc.createdAt.toISOString(),
     updatedAt: calc.updatedAt.toISOString(),
     version: calc.version,

@@ -1,5 +1,5 @@
 import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
-import type { AnalysisResponse, CalculationDto } from '@tiermode/shared-types';
+import type { AnalysisResponse, CalculationDto, SealCheckResponse } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';
@@ -7,6 +7,7 @@ import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import type { User } from '../users/user.entity';
 import { CalculationsService } from './calculations.service';
 import { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
+import { LockCalculationDto, ReturnCalculationDto } from './dto/review.dto';
 
 @Controller()
 export class CalculationsController {
@@ -59,5 +60,58 @@ export class CalculationsController {
     @Param('id', UuidParam('id')) id: string,
   ): Promise<AnalysisResponse> {
     return this.calculations.analyse(ability, id);
+  }
+
+  @Post('calculations/:id/submit')
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('submit', 'Calculation'))
+  submit(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<CalculationDto> {
+    return this.calculations.submit(ability, id);
+  }
+
+  @Post('calculations/:id/return')
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('return', 'Calculation'))
+  returnToDesigner(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+    @Body() body: ReturnCalculationDto,
+  ): Promise<CalculationDto> {
+    return this.calculations.returnToDesigner(ability, user, id, body.comment);
+  }
+
+  @Post('calculations/:id/lock')
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('lock', 'Calculation'))
+  lock(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+    @Body() body: LockCalculationDto,
+  ): Promise<CalculationDto> {
+    return this.calculations.lock(ability, user, id, body.statement);
+  }
+
+  @Post('calculations/:id/revise')
+  @CheckPolicies((ability) => ability.can('revise', 'Calculation'))
+  revise(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<CalculationDto> {
+    return this.calculations.revise(ability, user, id);
+  }
+
+  @Get('calculations/:id/seal')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  seal(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<SealCheckResponse> {
+    return this.calculations.checkSeal(ability, id);
   }
 }

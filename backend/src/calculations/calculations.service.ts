@@ -1,11 +1,13 @@
 import { ForbiddenError, subject } from '@casl/ability';
 import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { isLicensed } from '../authorization/licence';
 import type {
   AnalysisRequest,
   AnalysisResponse,
   CalculationDto,
   CalculationInputs,
+  SealCheckResponse,
 } from '@tiermode/shared-types';
 import { AnalysisService } from '../analysis/analysis.service';
 import { accessibleWhere } from '../authorization/accessible-where';
@@ -13,11 +15,19 @@ import type { AppAbility } from '../authorization/app-ability';
 import { Project } from '../projects/project.entity';
 import { projectSubject } from '../projects/project.mapper';
 import type { User } from '../users/user.entity';
+import { ReviewComment } from './review-comment.entity';
+import { sealHash, type SealedContent } from './seal';
 import { Calculation } from './calculation.entity';
 import { calculationSubject, toCalculationDto } from './calculation.mapper';
 import type { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
 
-const POPULATE = ['project.members', 'author'] as const;
+const POPULATE = [
+  'project.members',
+  'author',
+  'reviewer',
+  'comments.author',
+  'previousRevision',
+] as const;
 
 /** The inputs as plain JSON, whatever class instances validation made of them. */
 function plainInputs(inputs: AnalysisRequest): CalculationInputs {
@@ -121,6 +131,163 @@ export class CalculationsService {
     return result;
   }
 
+  /** Designer: send a draft whose stored analysis matches its inputs to review. */
+  async submit(ability: AppAbility, id: string): Promise<CalculationDto> {
+    const calc = await this.loadForWrite(ability, id, 'submit');
+    if (!calc.analysis || !calc.analysedAt || calc.analysedAt < calc.inputsChangedAt) {
+      throw new ConflictException(
+        'Analyse the current inputs before submitting: the stored analysis is missing or older than the inputs',
+      );
+    }
+    calc.status = 'submitted';
+    calc.submittedAt = new Date();
+    await this.em.flush();
+    return toCalculationDto(calc);
+  }
+
+  /** Reviewer: send a submitted calc back to its designers as a draft, with a comment. */
+  async returnToDesigner(
+    ability: AppAbility,
+    reviewer: User,
+    id: string,
+    comment: string,
+  ): Promise<CalculationDto> {
+    const calc = await this.loadSubmitted(ability, id, 'return');
+    this.em.create(ReviewComment, { calculation: calc, author: reviewer, body: comment });
+    calc.status = 'draft';
+    calc.returnedAt = new Date();
+    calc.reviewer = reviewer;
+    await this.em.flush();
+    await this.em.populate(calc, ['comments.author'], { refresh: true });
+    return toCalculationDto(calc);
+  }
+
+  /**
+   * Licensed reviewer, not the author: accept a submitted calc as the calc of record. The seal
+   * hashes the inputs, the stored analysis, the engine version, the reviewer's name and licence,
+   * the statement and the time. An older locked revision becomes superseded.
+   */
+  async lock(
+    ability: AppAbility,
+    reviewer: User,
+    id: string,
+    statement: string,
+  ): Promise<CalculationDto> {
+    const calc = await this.loadSubmitted(ability, id, 'lock');
+    const { analysis, engineVersion } = calc;
+    if (!analysis || !engineVersion || !isLicensed(reviewer)) {
+      throw new ConflictException('This calculation cannot be locked: it has no stored analysis');
+    }
+    const lockedAt = new Date();
+    const content: SealedContent = {
+      inputs: calc.inputs,
+      analysis,
+      engineVersion,
+      reviewerName: reviewer.name,
+      licenseNumber: reviewer.licenseNumber as string,
+      licenseJurisdiction: reviewer.licenseJurisdiction as string,
+      statement,
+      lockedAt: lockedAt.toISOString(),
+    };
+    calc.seal = {
+      hash: sealHash(content),
+      reviewerId: reviewer.id,
+      reviewerName: content.reviewerName,
+      licenseNumber: content.licenseNumber,
+      licenseJurisdiction: content.licenseJurisdiction,
+      statement,
+      lockedAt: content.lockedAt,
+    };
+    calc.status = 'locked';
+    calc.lockedAt = lockedAt;
+    calc.reviewer = reviewer;
+    const previous = calc.previousRevision;
+    if (previous && previous.status === 'locked') previous.status = 'superseded';
+    await this.em.flush();
+    return toCalculationDto(calc);
+  }
+
+  /** Designer: start the next revision of a locked calc as a new draft with its inputs. */
+  async revise(ability: AppAbility, author: User, id: string): Promise<CalculationDto> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    if (calc.status !== 'locked') {
+      throw new ConflictException(
+        `Only a locked calculation can be revised; this one is ${calc.status}`,
+      );
+    }
+    ForbiddenError.from(ability).throwUnlessCan(
+      'revise',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    const next = await this.em.findOne(Calculation, { previousRevision: calc });
+    if (next) {
+      throw new ConflictException(`Revision ${next.revision} of this calculation already exists`);
+    }
+    const draft = this.em.create(Calculation, {
+      project: calc.project,
+      title: calc.title,
+      revision: calc.revision + 1,
+      inputs: structuredClone(calc.inputs),
+      author,
+      previousRevision: calc,
+    });
+    await this.em.flush();
+    return toCalculationDto(await this.load(draft.id));
+  }
+
+  /** Recomputes the seal from what is stored: a changed row shows valid: false. */
+  async checkSeal(ability: AppAbility, id: string): Promise<SealCheckResponse> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    const { seal, analysis, engineVersion } = calc;
+    if (!seal) throw new NotFoundException('This calculation is not locked, so it has no seal');
+    const recomputed =
+      analysis && engineVersion
+        ? sealHash({
+            inputs: calc.inputs,
+            analysis,
+            engineVersion,
+            reviewerName: seal.reviewerName,
+            licenseNumber: seal.licenseNumber,
+            licenseJurisdiction: seal.licenseJurisdiction,
+            statement: seal.statement,
+            lockedAt: seal.lockedAt,
+          })
+        : '';
+    return { valid: recomputed === seal.hash, hash: seal.hash, recomputed, seal };
+  }
+
+  private async loadSubmitted(
+    ability: AppAbility,
+    id: string,
+    action: 'return' | 'lock',
+  ): Promise<Calculation> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    ForbiddenError.from(ability).throwUnlessCan(
+      action,
+      subject('Calculation', calculationSubject(calc)),
+    );
+    if (calc.status !== 'submitted') {
+      throw new ConflictException(
+        calc.status === 'locked' || calc.status === 'superseded'
+          ? `This calculation is ${calc.status} (sealed ${calc.seal?.hash.slice(0, 12) ?? ''}…) and can never change`
+          : `Only a submitted calculation can be ${action === 'lock' ? 'locked' : 'returned'}; this one is ${calc.status}`,
+      );
+    }
+    return calc;
+  }
+
   private async load(id: string): Promise<Calculation> {
     const calc = await this.em.findOne(Calculation, { id }, { populate: POPULATE });
     if (!calc) throw new NotFoundException(`No calculation with id ${id}`);
@@ -134,7 +301,7 @@ export class CalculationsService {
   private async loadForWrite(
     ability: AppAbility,
     id: string,
-    action: 'update' | 'analyse',
+    action: 'update' | 'analyse' | 'submit',
   ): Promise<Calculation> {
     const calc = await this.load(id);
     ForbiddenError.from(ability).throwUnlessCan(
@@ -143,7 +310,7 @@ export class CalculationsService {
     );
     if (calc.status === 'locked' || calc.status === 'superseded') {
       throw new ConflictException(
-        `This calculation is ${calc.status} and can never change; revise it to start a new draft`,
+        `This calculation is ${calc.status} (sealed ${calc.seal?.hash.slice(0, 12) ?? ''}…) and can never change; revise it to start a new draft`,
       );
     }
     if (calc.status === 'submitted') {

@@ -2,10 +2,12 @@ import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201215434 } from './Migration20261201215434';
 import { Migration20261201231437 } from './Migration20261201231437';
 import { Migration20261201231817 } from './Migration20261201231817';
+import { Migration20261201232131 } from './Migration20261201232131';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201215434', class: Migration20261201215434 },
   { name: 'Migration20261201231437', class: Migration20261201231437 },
   { name: 'Migration20261201231817', class: Migration20261201231817 },
+  { name: 'Migration20261201232131', class: Migration20261201232131 },
 ];

@@ -1,0 +1,25 @@
+import { randomUUID } from 'node:crypto';
+import { Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import { User } from '../users/user.entity';
+import { Calculation } from './calculation.entity';
+
+/** A reviewer's comment on a calculation (a return always carries one). */
+@Entity({ tableName: 'review_comments' })
+export class ReviewComment {
+  [OptionalProps]?: 'createdAt';
+
+  @PrimaryKey({ type: 'uuid' })
+  id: string = randomUUID();
+
+  @ManyToOne(() => Calculation)
+  calculation!: Calculation;
+
+  @ManyToOne(() => User)
+  author!: User;
+
+  @Property({ type: 'text' })
+  body!: string;
+
+  @Property({ type: 'datetime' })
+  createdAt: Date = new Date();
+}

@@ -1,0 +1,25 @@
+import { createHash } from 'node:crypto';
+import canonicalize from 'canonicalize';
+import type { AnalysisResponse, CalculationInputs } from '@tiermode/shared-types';
+
+/** Everything a lock seals. */
+export interface SealedContent {
+  inputs: CalculationInputs;
+  analysis: AnalysisResponse;
+  engineVersion: string;
+  reviewerName: string;
+  licenseNumber: string;
+  licenseJurisdiction: string;
+  statement: string;
+  lockedAt: string;
+}
+
+/**
+ * SHA-256 (hex) of the RFC 8785 canonical JSON (the `canonicalize` package) of the sealed content:
+ * the same content always gives the same hash, whatever the order of keys it was stored in.
+ */
+export function sealHash(content: SealedContent): string {
+  const canonical = canonicalize(content);
+  if (canonical === undefined) throw new Error('The sealed content cannot be written as JSON');
+  return createHash('sha256').update(canonical, 'utf8').digest('hex');
+}
