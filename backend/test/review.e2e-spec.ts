@@ -211,3 +211,59 @@ describe('Review, lock, seal and revise', () => {
     await http().get(`/api/calculations/${calc.id}/seal`).set(as('designer')).expect(404);
   });
 });
+
+describe('GET /api/library', () => {
+  let app: INestApplication<App>;
+  const tokens = {} as Record<DemoRole, string>;
+  const http = () => request(app.getHttpServer());
+  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    for (const role of ['designer', 'reviewer', 'student'] as const)
+      tokens[role] = await tokenFor(app, role);
+  });
+  afterAll(() => app.close());
+
+  it('lists locked calcs for a student, and never a draft or a submitted one', async () => {
+    const projectId = (
+      await http().post('/api/projects').set(as('designer')).send({ name: 'Library project' })
+    ).body.id;
+    const make = async (title: string) => {
+      const calc = (
+        await http()
+          .post(`/api/projects/${projectId}/calculations`)
+          .set(as('designer'))
+          .send({ title, inputs: inputs() })
+      ).body;
+      await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+      return calc.id as string;
+    };
+    const draftId = await make('Still a draft');
+    const submittedId = await make('Under review');
+    await http().post(`/api/calculations/${submittedId}/submit`).set(as('designer')).expect(200);
+    const lockedId = await make('Calc of record');
+    await http().post(`/api/calculations/${lockedId}/submit`).set(as('designer')).expect(200);
+    await http()
+      .post(`/api/calculations/${lockedId}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted.' })
+      .expect(200);
+
+    const library = await http().get('/api/library').set(as('student')).expect(200);
+    const here = library.body.filter((e: { projectId: string }) => e.projectId === projectId);
+    expect(here.map((e: { title: string }) => e.title)).toEqual(['Calc of record']);
+    expect(
+      library.body.every((e: { status: string }) => ['locked', 'superseded'].includes(e.status)),
+    ).toBe(true);
+    expect(here[0]).toMatchObject({
+      status: 'locked',
+      storeyCount: 3,
+      buildingHeight: 11,
+      reviewerName: 'Tomas Hale',
+    });
+    await http().get(`/api/calculations/${lockedId}`).set(as('student')).expect(200);
+    await http().get(`/api/calculations/${draftId}`).set(as('student')).expect(403);
+    await http().get(`/api/calculations/${submittedId}`).set(as('student')).expect(403);
+  });
+});

@@ -89,3 +89,19 @@ export interface ReviewCommentDto {
   body: string;
   createdAt: string;
 }
+
+/** `GET /api/library`: a calc of record (locked or superseded), as the library lists it. */
+export interface LibraryEntryDto {
+  id: string;
+  title: string;
+  revision: number;
+  status: 'locked' | 'superseded';
+  projectId: string;
+  projectName: string;
+  storeyCount: number;
+  /** m, from the base to the roof */
+  buildingHeight: number;
+  reviewerName: string;
+  lockedAt: string;
+  sealHash: string;
+}

@@ -4,10 +4,11 @@ import { AnalysisModule } from '../analysis/analysis.module';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
 import { CalculationsService } from './calculations.service';
+import { LibraryController } from './library.controller';
 
 @Module({
   imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule],
-  controllers: [CalculationsController],
+  controllers: [CalculationsController, LibraryController],
   providers: [CalculationsService],
 })
 export class CalculationsModule {}
