@@ -2,6 +2,7 @@ import { defineConfig } from '@mikro-orm/sqlite';
 import { Migrator } from '@mikro-orm/migrations';
 import { loadEnvironment } from './config/environment';
 import { MIGRATIONS } from './migrations';
+import { AuditEvent } from './audit/audit-event.entity';
 import { Calculation } from './calculations/calculation.entity';
 import { LockedCalculationSubscriber } from './calculations/locked-calculation.subscriber';
 import { ReviewComment } from './calculations/review-comment.entity';
@@ -25,7 +26,7 @@ const CONNECTION_PRAGMAS = [
 export function createOrmConfig(databasePath: string) {
   return defineConfig({
     dbName: databasePath,
-    entities: [User, Project, Calculation, ReviewComment],
+    entities: [User, Project, Calculation, ReviewComment, AuditEvent],
     subscribers: [new LockedCalculationSubscriber()],
     extensions: [Migrator],
     // Schema changes go through committed migrations only.

@@ -267,3 +267,72 @@ describe('GET /api/library', () => {
     await http().get(`/api/calculations/${submittedId}`).set(as('student')).expect(403);
   });
 });
+
+describe('The audit trail', () => {
+  let app: INestApplication<App>;
+  const tokens = {} as Record<DemoRole, string>;
+  const http = () => request(app.getHttpServer());
+  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const)
+      tokens[role] = await tokenFor(app, role);
+  });
+  afterAll(() => app.close());
+
+  it('records each step as a chained event, verifies, and finds a tampered event', async () => {
+    const projectId = (
+      await http().post('/api/projects').set(as('designer')).send({ name: 'Audit project' })
+    ).body.id;
+    const calc = (
+      await http()
+        .post(`/api/projects/${projectId}/calculations`)
+        .set(as('designer'))
+        .send({ title: 'Audited', inputs: inputs() })
+    ).body;
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    await http()
+      .post(`/api/calculations/${calc.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted.' })
+      .expect(200);
+
+    const history = await http()
+      .get(`/api/calculations/${calc.id}/history`)
+      .set(as('designer'))
+      .expect(200);
+    expect(history.body.map((e: { action: string }) => e.action)).toEqual([
+      'created',
+      'analysed',
+      'submitted',
+      'locked',
+    ]);
+    expect(history.body.map((e: { actorName: string }) => e.actorName)).toEqual([
+      'Mira Castell',
+      'Mira Castell',
+      'Mira Castell',
+      'Tomas Hale',
+    ]);
+    history.body
+      .slice(1)
+      .forEach((e: { previousHash: string }, i: number) =>
+        expect(e.previousHash).toBe(history.body[i].hash),
+      );
+
+    await http().get('/api/audit/verify').set(as('designer')).expect(403);
+    await http().get('/api/audit/verify').set(as('student')).expect(403);
+    expect((await http().get('/api/audit/verify').set(as('admin')).expect(200)).body).toMatchObject(
+      { valid: true, brokenAt: null },
+    );
+
+    const analysed = history.body[1];
+    await app
+      .get(MikroORM)
+      .em.getConnection()
+      .execute(`update audit_events set actor_name = 'Someone else' where seq = ?`, [analysed.seq]);
+    const broken = await http().get('/api/audit/verify').set(as('reviewer')).expect(200);
+    expect(broken.body).toMatchObject({ valid: false, brokenAt: analysed.seq });
+  });
+});

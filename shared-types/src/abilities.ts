@@ -27,6 +27,7 @@ export const SUBJECTS = [
   'Outbox',
   'Analysis',
   'Verification',
+  'AuditTrail',
 ] as const;
 export type Subject = (typeof SUBJECTS)[number];
 

@@ -6,3 +6,4 @@ export * from './http';
 export * from './analysis';
 export * from './projects';
 export * from './calculations';
+export * from './audit';

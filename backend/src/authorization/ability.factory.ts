@@ -31,6 +31,7 @@ export class AbilityFactory {
         );
         can('read', 'Outbox');
         can('read', 'Calculation');
+        can('read', 'AuditTrail');
         break;
       case 'designer':
         can('create', 'Project');
@@ -50,6 +51,7 @@ export class AbilityFactory {
         can('read', 'Project');
         can('read', 'Calculation');
         can(['comment', 'return'], 'Calculation');
+        can('read', 'AuditTrail');
         if (isLicensed(user, today)) {
           can('lock', 'Calculation');
           cannot('lock', 'Calculation', { authorId: user.id }).because(

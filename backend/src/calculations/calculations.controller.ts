@@ -1,5 +1,10 @@
 import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
-import type { AnalysisResponse, CalculationDto, SealCheckResponse } from '@tiermode/shared-types';
+import type {
+  AnalysisResponse,
+  AuditEventDto,
+  CalculationDto,
+  SealCheckResponse,
+} from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';
@@ -46,10 +51,11 @@ export class CalculationsController {
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   update(
     @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
     @Param('id', UuidParam('id')) id: string,
     @Body() body: UpdateCalculationDto,
   ): Promise<CalculationDto> {
-    return this.calculations.update(ability, id, body);
+    return this.calculations.update(ability, user, id, body);
   }
 
   @Post('calculations/:id/analyse')
@@ -57,9 +63,10 @@ export class CalculationsController {
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   analyse(
     @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
     @Param('id', UuidParam('id')) id: string,
   ): Promise<AnalysisResponse> {
-    return this.calculations.analyse(ability, id);
+    return this.calculations.analyse(ability, user, id);
   }
 
   @Post('calculations/:id/submit')
@@ -67,9 +74,10 @@ export class CalculationsController {
   @CheckPolicies((ability) => ability.can('submit', 'Calculation'))
   submit(
     @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
     @Param('id', UuidParam('id')) id: string,
   ): Promise<CalculationDto> {
-    return this.calculations.submit(ability, id);
+    return this.calculations.submit(ability, user, id);
   }
 
   @Post('calculations/:id/return')
@@ -113,5 +121,14 @@ export class CalculationsController {
     @Param('id', UuidParam('id')) id: string,
   ): Promise<SealCheckResponse> {
     return this.calculations.checkSeal(ability, id);
+  }
+
+  @Get('calculations/:id/history')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  history(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<AuditEventDto[]> {
+    return this.calculations.history(ability, id);
   }
 }

@@ -1,13 +1,14 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
 import { AnalysisModule } from '../analysis/analysis.module';
+import { AuditModule } from '../audit/audit.module';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
 import { CalculationsService } from './calculations.service';
 import { LibraryController } from './library.controller';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule],
+  imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule, AuditModule],
   controllers: [CalculationsController, LibraryController],
   providers: [CalculationsService],
 })

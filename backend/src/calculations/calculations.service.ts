@@ -11,6 +11,7 @@ import type {
   SealCheckResponse,
 } from '@tiermode/shared-types';
 import { AnalysisService } from '../analysis/analysis.service';
+import { AuditService } from '../audit/audit.service';
 import { accessibleWhere } from '../authorization/accessible-where';
 import type { AppAbility } from '../authorization/app-ability';
 import { Project } from '../projects/project.entity';
@@ -40,6 +41,7 @@ export class CalculationsService {
   constructor(
     private readonly em: EntityManager,
     private readonly analysis: AnalysisService,
+    private readonly audit: AuditService,
   ) {}
 
   async listForProject(ability: AppAbility, projectId: string): Promise<CalculationDto[]> {
@@ -81,7 +83,7 @@ export class CalculationsService {
     const inputs = plainInputs(body.inputs);
     this.analysis.validate(inputs, 'inputs.');
     const calc = this.em.create(Calculation, { project, title: body.title, inputs, author });
-    await this.em.flush();
+    await this.audit.commit(this.em, { calculationId: calc.id, actor: author, action: 'created' });
     return toCalculationDto(calc);
   }
 
@@ -96,6 +98,7 @@ export class CalculationsService {
 
   async update(
     ability: AppAbility,
+    actor: User,
     id: string,
     body: UpdateCalculationDto,
   ): Promise<CalculationDto> {
@@ -117,23 +120,33 @@ export class CalculationsService {
       calc.inputs = inputs;
       calc.inputsChangedAt = new Date();
     }
-    await this.em.flush();
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor,
+      action: 'edited',
+      detail: { title: body.title !== undefined, inputs: body.inputs !== undefined },
+    });
     return toCalculationDto(calc);
   }
 
   /** Runs the engine on the stored inputs and keeps the result with the engine version. */
-  async analyse(ability: AppAbility, id: string): Promise<AnalysisResponse> {
+  async analyse(ability: AppAbility, actor: User, id: string): Promise<AnalysisResponse> {
     const calc = await this.loadForWrite(ability, id, 'analyse');
     const result = this.analysis.analyse(calc.inputs);
     calc.analysis = result;
     calc.engineVersion = result.engineVersion;
     calc.analysedAt = new Date();
-    await this.em.flush();
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor,
+      action: 'analysed',
+      detail: { engineVersion: result.engineVersion, cqcBaseShear: result.combined.cqc.baseShear },
+    });
     return result;
   }
 
   /** Designer: send a draft whose stored analysis matches its inputs to review. */
-  async submit(ability: AppAbility, id: string): Promise<CalculationDto> {
+  async submit(ability: AppAbility, actor: User, id: string): Promise<CalculationDto> {
     const calc = await this.loadForWrite(ability, id, 'submit');
     if (!calc.analysis || !calc.analysedAt || calc.analysedAt < calc.inputsChangedAt) {
       throw new ConflictException(
@@ -142,7 +155,7 @@ export class CalculationsService {
     }
     calc.status = 'submitted';
     calc.submittedAt = new Date();
-    await this.em.flush();
+    await this.audit.commit(this.em, { calculationId: calc.id, actor, action: 'submitted' });
     return toCalculationDto(calc);
   }
 
@@ -158,7 +171,12 @@ export class CalculationsService {
     calc.status = 'draft';
     calc.returnedAt = new Date();
     calc.reviewer = reviewer;
-    await this.em.flush();
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor: reviewer,
+      action: 'returned',
+      detail: { comment },
+    });
     await this.em.populate(calc, ['comments.author'], { refresh: true });
     return toCalculationDto(calc);
   }
@@ -204,7 +222,12 @@ export class CalculationsService {
     calc.reviewer = reviewer;
     const previous = calc.previousRevision;
     if (previous && previous.status === 'locked') previous.status = 'superseded';
-    await this.em.flush();
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor: reviewer,
+      action: 'locked',
+      detail: { sealHash: calc.seal.hash, supersedes: previous?.id ?? null },
+    });
     return toCalculationDto(calc);
   }
 
@@ -236,8 +259,23 @@ export class CalculationsService {
       author,
       previousRevision: calc,
     });
-    await this.em.flush();
+    await this.audit.commit(this.em, {
+      calculationId: draft.id,
+      actor: author,
+      action: 'revised',
+      detail: { from: calc.id, revision: draft.revision },
+    });
     return toCalculationDto(await this.load(draft.id));
+  }
+
+  /** The audit trail of one calculation. */
+  async history(ability: AppAbility, id: string) {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    return this.audit.historyOf(calc.id);
   }
 
   /** Recomputes the seal from what is stored: a changed row shows valid: false. */

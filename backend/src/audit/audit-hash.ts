@@ -1,0 +1,35 @@
+import { createHash } from 'node:crypto';
+import canonicalize from 'canonicalize';
+
+export const GENESIS_HASH = '0'.repeat(64);
+
+export interface AuditContent {
+  seq: number;
+  calculationId: string | null;
+  actorId: string;
+  actorName: string;
+  action: string;
+  detail: Record<string, unknown> | null;
+  at: string;
+  previousHash: string;
+}
+
+/** SHA-256 (hex) of the RFC 8785 canonical JSON of the event, its link included. */
+export function auditHash(content: AuditContent): string {
+  const canonical = canonicalize(content);
+  if (canonical === undefined) throw new Error('The audit event cannot be written as JSON');
+  return createHash('sha256').update(canonical, 'utf8').digest('hex');
+}
+
+/** Walks the chain in order: the first event whose hash or link fails, or null if all hold. */
+export function firstBrokenEvent(
+  events: readonly (AuditContent & { hash: string })[],
+): number | null {
+  let previous = GENESIS_HASH;
+  for (const event of events) {
+    const { hash, ...content } = event;
+    if (content.previousHash !== previous || auditHash(content) !== hash) return event.seq;
+    previous = hash;
+  }
+  return null;
+}

@@ -1,0 +1,16 @@
+import { Controller, Get } from '@nestjs/common';
+import type { AuditVerifyResponse } from '@tiermode/shared-types';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { AuditService } from './audit.service';
+
+@Controller('audit')
+export class AuditController {
+  constructor(private readonly audit: AuditService) {}
+
+  /** Walks the whole trail and says whether every hash and link still holds. */
+  @Get('verify')
+  @CheckPolicies((ability) => ability.can('read', 'AuditTrail'))
+  verify(): Promise<AuditVerifyResponse> {
+    return this.audit.verify();
+  }
+}
