@@ -6,6 +6,7 @@ import { AuditEvent } from './audit/audit-event.entity';
 import { Calculation } from './calculations/calculation.entity';
 import { LockedCalculationSubscriber } from './calculations/locked-calculation.subscriber';
 import { ReviewComment } from './calculations/review-comment.entity';
+import { MailMessage } from './mail/mail-message.entity';
 import { Project } from './projects/project.entity';
 import { User } from './users/user.entity';
 
@@ -26,7 +27,7 @@ const CONNECTION_PRAGMAS = [
 export function createOrmConfig(databasePath: string) {
   return defineConfig({
     dbName: databasePath,
-    entities: [User, Project, Calculation, ReviewComment, AuditEvent],
+    entities: [User, Project, Calculation, ReviewComment, AuditEvent, MailMessage],
     subscribers: [new LockedCalculationSubscriber()],
     extensions: [Migrator],
     // Schema changes go through committed migrations only.

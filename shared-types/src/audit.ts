@@ -19,3 +19,18 @@ export interface AuditVerifyResponse {
   /** The first event whose hash or link does not hold, or null. */
   brokenAt: number | null;
 }
+
+/** `GET /api/mail/outbox` (admin): what the mail catcher received, and mail not delivered. */
+export interface MailMessageDto {
+  id: string;
+  /** received: taken in by the local catcher; queued: waiting to be (re)sent; failed: gave up. */
+  status: 'received' | 'queued' | 'sent' | 'failed';
+  from: string;
+  to: string;
+  subject: string;
+  text: string;
+  attempts: number;
+  lastError: string | null;
+  /** ISO time */
+  createdAt: string;
+}

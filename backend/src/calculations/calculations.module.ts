@@ -2,13 +2,14 @@ import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
 import { AnalysisModule } from '../analysis/analysis.module';
 import { AuditModule } from '../audit/audit.module';
+import { MailModule } from '../mail/mail.module';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
 import { CalculationsService } from './calculations.service';
 import { LibraryController } from './library.controller';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule, AuditModule],
+  imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule, AuditModule, MailModule],
   controllers: [CalculationsController, LibraryController],
   providers: [CalculationsService],
 })

@@ -12,11 +12,12 @@ import type {
 } from '@tiermode/shared-types';
 import { AnalysisService } from '../analysis/analysis.service';
 import { AuditService } from '../audit/audit.service';
+import { MailService } from '../mail/mail.service';
 import { accessibleWhere } from '../authorization/accessible-where';
 import type { AppAbility } from '../authorization/app-ability';
 import { Project } from '../projects/project.entity';
 import { projectSubject } from '../projects/project.mapper';
-import type { User } from '../users/user.entity';
+import { User } from '../users/user.entity';
 import { ReviewComment } from './review-comment.entity';
 import { sealHash, type SealedContent } from './seal';
 import { Calculation } from './calculation.entity';
@@ -42,6 +43,7 @@ export class CalculationsService {
     private readonly em: EntityManager,
     private readonly analysis: AnalysisService,
     private readonly audit: AuditService,
+    private readonly mail: MailService,
   ) {}
 
   async listForProject(ability: AppAbility, projectId: string): Promise<CalculationDto[]> {
@@ -155,7 +157,14 @@ export class CalculationsService {
     }
     calc.status = 'submitted';
     calc.submittedAt = new Date();
+    const reviewers = await this.em.find(User, { role: 'reviewer', active: true });
+    this.mail.queue(this.em, {
+      to: reviewers.map((r) => r.email),
+      subject: `Submitted for review: ${calc.title} (revision ${calc.revision})`,
+      text: `${actor.name} submitted "${calc.title}", revision ${calc.revision}, in the project ${calc.project.name} for review.`,
+    });
     await this.audit.commit(this.em, { calculationId: calc.id, actor, action: 'submitted' });
+    this.mail.kick();
     return toCalculationDto(calc);
   }
 
@@ -171,12 +180,18 @@ export class CalculationsService {
     calc.status = 'draft';
     calc.returnedAt = new Date();
     calc.reviewer = reviewer;
+    this.mail.queue(this.em, {
+      to: [calc.author.email],
+      subject: `Returned with comments: ${calc.title} (revision ${calc.revision})`,
+      text: `${reviewer.name} returned "${calc.title}", revision ${calc.revision}, to you as a draft:\n\n${comment}`,
+    });
     await this.audit.commit(this.em, {
       calculationId: calc.id,
       actor: reviewer,
       action: 'returned',
       detail: { comment },
     });
+    this.mail.kick();
     await this.em.populate(calc, ['comments.author'], { refresh: true });
     return toCalculationDto(calc);
   }
@@ -222,12 +237,18 @@ export class CalculationsService {
     calc.reviewer = reviewer;
     const previous = calc.previousRevision;
     if (previous && previous.status === 'locked') previous.status = 'superseded';
+    this.mail.queue(this.em, {
+      to: [calc.author.email],
+      subject: `Locked as the calc of record: ${calc.title} (revision ${calc.revision})`,
+      text: `${reviewer.name} (licence ${calc.seal.licenseNumber}, ${calc.seal.licenseJurisdiction}) locked "${calc.title}", revision ${calc.revision}.\n\nStatement: ${statement}\nSeal: ${calc.seal.hash}`,
+    });
     await this.audit.commit(this.em, {
       calculationId: calc.id,
       actor: reviewer,
       action: 'locked',
       detail: { sealHash: calc.seal.hash, supersedes: previous?.id ?? null },
     });
+    this.mail.kick();
     return toCalculationDto(calc);
   }
 

@@ -9,6 +9,7 @@ import {
   IsOptional,
   IsString,
   Max,
+  Matches,
   MinLength,
   Min,
   validateSync,
@@ -44,6 +45,10 @@ class EnvironmentVariables {
   @IsOptional()
   @IsString()
   ADMIN_PASSWORD?: string;
+
+  @IsOptional()
+  @Matches(/^smtps?:\/\/\S+$/, { message: 'SMTP_URL must be an smtp:// or smtps:// URL' })
+  SMTP_URL?: string;
 }
 
 /** The resolved settings the app reads through ConfigService. */
@@ -54,6 +59,8 @@ export interface AppEnvironment {
   demoMode: boolean;
   adminEmail?: string;
   adminPassword?: string;
+  /** Unset: the built-in local mail catcher receives every message. */
+  smtpUrl?: string;
 }
 
 /**
@@ -68,6 +75,7 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
     DEMO: emptyToUndefined(raw.DEMO),
     ADMIN_EMAIL: emptyToUndefined(raw.ADMIN_EMAIL),
     ADMIN_PASSWORD: emptyToUndefined(raw.ADMIN_PASSWORD),
+    SMTP_URL: emptyToUndefined(raw.SMTP_URL),
   };
   const env = plainToInstance(EnvironmentVariables, picked);
   const errors = validateSync(env, { skipMissingProperties: false });
@@ -83,6 +91,7 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
     demoMode: (env.DEMO ?? 'on') === 'on',
     adminEmail: env.ADMIN_EMAIL,
     adminPassword: env.ADMIN_PASSWORD,
+    smtpUrl: env.SMTP_URL,
   };
 }
 

@@ -1,0 +1,44 @@
+import { randomUUID } from 'node:crypto';
+import { Entity, Enum, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+
+export const MAIL_STATUSES = ['received', 'queued', 'sent', 'failed'] as const;
+export type MailStatus = (typeof MAIL_STATUSES)[number];
+
+/**
+ * A mail message: one Tiermode sends (queued, then sent or failed, with its attempts), or one
+ * the local catcher received.
+ */
+@Entity({ tableName: 'mail_messages' })
+export class MailMessage {
+  [OptionalProps]?: 'attempts' | 'lastError' | 'createdAt' | 'sentAt';
+
+  @PrimaryKey({ type: 'uuid' })
+  id: string = randomUUID();
+
+  @Enum({ items: () => [...MAIL_STATUSES], type: 'string' })
+  status!: MailStatus;
+
+  @Property({ type: 'string', length: 320 })
+  from!: string;
+
+  @Property({ type: 'string', length: 2000 })
+  to!: string;
+
+  @Property({ type: 'string', length: 500 })
+  subject!: string;
+
+  @Property({ type: 'text' })
+  text!: string;
+
+  @Property({ type: 'integer' })
+  attempts: number = 0;
+
+  @Property({ type: 'text', nullable: true })
+  lastError: string | null = null;
+
+  @Property({ type: 'datetime' })
+  createdAt: Date = new Date();
+
+  @Property({ type: 'datetime', nullable: true })
+  sentAt: Date | null = null;
+}

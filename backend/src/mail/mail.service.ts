@@ -1,0 +1,146 @@
+import { EntityManager, MikroORM } from '@mikro-orm/sqlite';
+import { Injectable, Logger, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { MailMessageDto } from '@tiermode/shared-types';
+import { createTransport, type Transporter } from 'nodemailer';
+import type { AppEnvironment } from '../config/environment';
+import { MailCatcher } from './mail-catcher';
+import { MailMessage } from './mail-message.entity';
+
+const FROM = 'Tiermode <no-reply@tiermode.test>';
+/** Wait before each further attempt; after the last, the message is marked failed. */
+const RETRY_DELAYS_MS = [2_000, 10_000, 60_000, 300_000];
+
+export interface OutgoingMail {
+  to: string[];
+  subject: string;
+  text: string;
+}
+
+/**
+ * Every message goes out over SMTP (nodemailer): to SMTP_URL, or, when it is unset, to the local
+ * catcher this service starts on a loopback port. A message is queued in the same flush as the
+ * action that causes it and delivered after that flush, so a mail failure never loses the
+ * action: the message is retried, and its failure is visible in the outbox.
+ */
+@Injectable()
+export class MailService implements OnModuleInit, OnModuleDestroy {
+  private readonly logger = new Logger('Mail');
+  private transport?: Transporter;
+  private catcher?: MailCatcher;
+  private readonly timers = new Set<NodeJS.Timeout>();
+  private delivering: Promise<void> = Promise.resolve();
+
+  constructor(
+    private readonly orm: MikroORM,
+    private readonly config: ConfigService<AppEnvironment, true>,
+  ) {}
+
+  async onModuleInit(): Promise<void> {
+    const smtpUrl = this.config.get('smtpUrl', { infer: true });
+    if (smtpUrl) {
+      this.transport = createTransport(smtpUrl);
+      return;
+    }
+    this.catcher = new MailCatcher((mail) => this.storeCaught(mail));
+    const port = await this.catcher.listen();
+    this.transport = createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
+    this.logger.log(`Local mail catcher listening on 127.0.0.1:${port}`);
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    this.timers.forEach((t) => clearTimeout(t));
+    await this.delivering.catch(() => undefined);
+    this.transport?.close();
+    await this.catcher?.close();
+  }
+
+  /** Queues a message; it is written by the caller's next flush, with the action. */
+  queue(em: EntityManager, mail: OutgoingMail): void {
+    if (mail.to.length === 0) return;
+    em.create(MailMessage, {
+      status: 'queued',
+      from: FROM,
+      to: mail.to.join(', '),
+      subject: mail.subject,
+      text: mail.text,
+    });
+  }
+
+  /** Delivers whatever is queued, in the background; never throws to the caller. */
+  kick(): void {
+    this.delivering = this.delivering
+      .then(() => this.deliverQueued())
+      .catch((error: unknown) => {
+        this.logger.error(
+          `Mail delivery failed: ${error instanceof Error ? error.message : String(error)}`,
+        );
+      });
+  }
+
+  /** For tests and shutdown: resolves when the current delivery round is over. */
+  settled(): Promise<void> {
+    return this.delivering;
+  }
+
+  async outbox(): Promise<MailMessageDto[]> {
+    const messages = await this.orm.em
+      .fork()
+      .find(MailMessage, {}, { orderBy: { createdAt: 'desc' } });
+    return messages.map((m) => ({
+      id: m.id,
+      status: m.status,
+      from: m.from,
+      to: m.to,
+      subject: m.subject,
+      text: m.text,
+      attempts: m.attempts,
+      lastError: m.lastError,
+      createdAt: m.createdAt.toISOString(),
+    }));
+  }
+
+  private async deliverQueued(): Promise<void> {
+    const em = this.orm.em.fork();
+    const queued = await em.find(
+      MailMessage,
+      { status: 'queued' },
+      { orderBy: { createdAt: 'asc' } },
+    );
+    for (const message of queued) {
+      message.attempts += 1;
+      try {
+        await this.transport?.sendMail({
+          from: message.from,
+          to: message.to,
+          subject: message.subject,
+          text: message.text,
+        });
+        message.status = 'sent';
+        message.sentAt = new Date();
+        message.lastError = null;
+      } catch (error) {
+        message.lastError = error instanceof Error ? error.message : String(error);
+        const delay = RETRY_DELAYS_MS[message.attempts - 1];
+        if (delay === undefined) message.status = 'failed';
+        else this.retryIn(delay);
+      }
+      await em.flush();
+    }
+  }
+
+  private retryIn(delayMs: number): void {
+    const timer = setTimeout(() => {
+      this.timers.delete(timer);
+      this.kick();
+    }, delayMs);
+    timer.unref();
+    this.timers.add(timer);
+  }
+
+  private async storeCaught(mail: { from: string; to: string; subject: string; text: string }) {
+    const em = this.orm.em.fork();
+    em.create(MailMessage, { status: 'received', ...mail, sentAt: new Date() });
+    await em.flush();
+  }
+}

@@ -1,0 +1,92 @@
+import type { INestApplication } from '@nestjs/common';
+import request from 'supertest';
+import type { App } from 'supertest/types';
+import { MailService } from '../src/mail/mail.service';
+import { createTestApp, tokenFor, type DemoRole } from './support/test-app';
+
+const inputs = () => ({
+  storeys: [
+    { mass: 300000, stiffness: 4e8, height: 4 },
+    { mass: 220000, stiffness: 3e8, height: 3.5 },
+  ],
+  spectrum: {
+    points: [
+      { period: 0, sa: 0.4 },
+      { period: 0.5, sa: 1 },
+      { period: 4, sa: 0.2 },
+    ],
+  },
+  dampingRatio: 0.05,
+});
+
+type Mail = { status: string; to: string; subject: string; text: string };
+
+describe('Mail through the local catcher', () => {
+  let app: INestApplication<App>;
+  const tokens = {} as Record<DemoRole, string>;
+  const http = () => request(app.getHttpServer());
+  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const)
+      tokens[role] = await tokenFor(app, role);
+  });
+  afterAll(() => app.close());
+
+  async function received(subjectStart: string): Promise<Mail> {
+    for (let i = 0; i < 50; i += 1) {
+      await app.get(MailService).settled();
+      const outbox = (await http().get('/api/mail/outbox').set(as('admin')).expect(200))
+        .body as Mail[];
+      const found = outbox.find(
+        (m) => m.status === 'received' && m.subject.startsWith(subjectStart),
+      );
+      if (found) return found;
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    throw new Error(`No mail "${subjectStart}…" reached the catcher`);
+  }
+
+  it('tells reviewers of a submission and the author of a return and a lock, over SMTP', async () => {
+    const projectId = (
+      await http().post('/api/projects').set(as('designer')).send({ name: 'Mail project' })
+    ).body.id;
+    const calc = (
+      await http()
+        .post(`/api/projects/${projectId}/calculations`)
+        .set(as('designer'))
+        .send({ title: 'Mailed calc', inputs: inputs() })
+    ).body;
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    const submitted = await received('Submitted for review: Mailed calc');
+    expect(submitted.to).toBe('reviewer@tiermode.test');
+
+    await http()
+      .post(`/api/calculations/${calc.id}/return`)
+      .set(as('reviewer'))
+      .send({ comment: 'Use the cracked stiffness.' })
+      .expect(200);
+    const returned = await received('Returned with comments: Mailed calc');
+    expect(returned.to).toBe('designer@tiermode.test');
+    expect(returned.text).toContain('Use the cracked stiffness.');
+
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    const locked = await http()
+      .post(`/api/calculations/${calc.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted.' })
+      .expect(200);
+    const lockMail = await received('Locked as the calc of record: Mailed calc');
+    expect(lockMail.to).toBe('designer@tiermode.test');
+    expect(lockMail.text).toContain(locked.body.seal.hash);
+  });
+
+  it('shows the outbox to admins only', async () => {
+    for (const role of ['designer', 'reviewer', 'student'] as const) {
+      await http().get('/api/mail/outbox').set(as(role)).expect(403);
+    }
+  });
+});
