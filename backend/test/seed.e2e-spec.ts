@@ -4,6 +4,11 @@ import { join } from 'node:path';
 import { MikroORM } from '@mikro-orm/sqlite';
 import { prepareDatabase } from '../src/database/prepare-database';
 import { createOrmConfig } from '../src/mikro-orm.config';
+import { AuditEvent } from '../src/audit/audit-event.entity';
+import { firstBrokenEvent } from '../src/audit/audit-hash';
+import { Calculation } from '../src/calculations/calculation.entity';
+import { sealedContentOf } from '../src/calculations/lock';
+import { sealHash } from '../src/calculations/seal';
 import { User } from '../src/users/user.entity';
 
 async function freshOrm(): Promise<MikroORM> {
@@ -27,6 +32,43 @@ describe('Migrations and seeding', () => {
         ['reviewer@tiermode.test', 'reviewer'],
         ['student@tiermode.test', 'student'],
       ]);
+    } finally {
+      await orm.close();
+    }
+  });
+
+  it('seeds the demo buildings: one calc locked with a valid seal, one submitted, all on the audit trail', async () => {
+    const orm = await freshOrm();
+    try {
+      await prepareDatabase(orm, { demoMode: true });
+      const em = orm.em.fork();
+      const calcs = await em.find(
+        Calculation,
+        {},
+        { populate: ['project'], orderBy: { project: { name: 'asc' } } },
+      );
+      expect(calcs.map((c) => [c.project.name, c.status, c.inputs.storeys.length])).toEqual([
+        ['Alder Court housing block', 'locked', 7],
+        ['Quarry Lane laboratory', 'submitted', 12],
+      ]);
+      const locked = calcs[0];
+      const content = locked.seal && sealedContentOf(locked, locked.seal);
+      expect(content && sealHash(content)).toBe(locked.seal?.hash);
+      expect(locked.analysis?.modes).toHaveLength(7);
+      const events = await em.find(AuditEvent, {}, { orderBy: { seq: 'asc' } });
+      expect(events.map((e) => e.action)).toEqual([
+        'created',
+        'analysed',
+        'submitted',
+        'locked',
+        'created',
+        'analysed',
+        'submitted',
+      ]);
+      expect(firstBrokenEvent(events)).toBeNull();
+      // Running again on the seeded database adds nothing.
+      await prepareDatabase(orm, { demoMode: true });
+      expect(await orm.em.fork().count(Calculation, {})).toBe(2);
     } finally {
       await orm.close();
     }

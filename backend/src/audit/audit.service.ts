@@ -1,16 +1,9 @@
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable } from '@nestjs/common';
 import type { AuditEventDto, AuditVerifyResponse } from '@tiermode/shared-types';
-import type { User } from '../users/user.entity';
+import { appendAuditEvent, type AuditEntry } from './append-audit-event';
 import { AuditEvent } from './audit-event.entity';
-import { auditHash, firstBrokenEvent, GENESIS_HASH } from './audit-hash';
-
-export interface AuditEntry {
-  calculationId: string | null;
-  actor: User;
-  action: string;
-  detail?: Record<string, unknown>;
-}
+import { firstBrokenEvent } from './audit-hash';
 
 @Injectable()
 export class AuditService {
@@ -26,18 +19,7 @@ export class AuditService {
    */
   commit(em: EntityManager, entry: AuditEntry): Promise<void> {
     const run = this.tail.then(async () => {
-      const [last] = await em.find(AuditEvent, {}, { orderBy: { seq: 'desc' }, limit: 1 });
-      const content = {
-        seq: (last?.seq ?? 0) + 1,
-        calculationId: entry.calculationId,
-        actorId: entry.actor.id,
-        actorName: entry.actor.name,
-        action: entry.action,
-        detail: entry.detail ?? null,
-        at: new Date().toISOString(),
-        previousHash: last?.hash ?? GENESIS_HASH,
-      };
-      em.create(AuditEvent, { ...content, hash: auditHash(content) });
+      await appendAuditEvent(em, entry);
       await em.flush();
     });
     this.tail = run.catch(() => undefined);

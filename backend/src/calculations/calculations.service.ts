@@ -19,7 +19,8 @@ import { Project } from '../projects/project.entity';
 import { projectSubject } from '../projects/project.mapper';
 import { User } from '../users/user.entity';
 import { ReviewComment } from './review-comment.entity';
-import { sealHash, type SealedContent } from './seal';
+import { applyLock, sealedContentOf } from './lock';
+import { sealHash } from './seal';
 import { Calculation } from './calculation.entity';
 import { calculationSubject, toCalculationDto } from './calculation.mapper';
 import type { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
@@ -208,45 +209,21 @@ export class CalculationsService {
     statement: string,
   ): Promise<CalculationDto> {
     const calc = await this.loadSubmitted(ability, id, 'lock');
-    const { analysis, engineVersion } = calc;
-    if (!analysis || !engineVersion || !isLicensed(reviewer)) {
+    if (!calc.analysis || !calc.engineVersion || !isLicensed(reviewer)) {
       throw new ConflictException('This calculation cannot be locked: it has no stored analysis');
     }
-    const lockedAt = new Date();
-    const content: SealedContent = {
-      inputs: calc.inputs,
-      analysis,
-      engineVersion,
-      reviewerName: reviewer.name,
-      licenseNumber: reviewer.licenseNumber as string,
-      licenseJurisdiction: reviewer.licenseJurisdiction as string,
-      statement,
-      lockedAt: lockedAt.toISOString(),
-    };
-    calc.seal = {
-      hash: sealHash(content),
-      reviewerId: reviewer.id,
-      reviewerName: content.reviewerName,
-      licenseNumber: content.licenseNumber,
-      licenseJurisdiction: content.licenseJurisdiction,
-      statement,
-      lockedAt: content.lockedAt,
-    };
-    calc.status = 'locked';
-    calc.lockedAt = lockedAt;
-    calc.reviewer = reviewer;
+    const seal = applyLock(calc, reviewer, statement, new Date());
     const previous = calc.previousRevision;
-    if (previous && previous.status === 'locked') previous.status = 'superseded';
     this.mail.queue(this.em, {
       to: [calc.author.email],
       subject: `Locked as the calc of record: ${calc.title} (revision ${calc.revision})`,
-      text: `${reviewer.name} (licence ${calc.seal.licenseNumber}, ${calc.seal.licenseJurisdiction}) locked "${calc.title}", revision ${calc.revision}.\n\nStatement: ${statement}\nSeal: ${calc.seal.hash}`,
+      text: `${reviewer.name} (licence ${seal.licenseNumber}, ${seal.licenseJurisdiction}) locked "${calc.title}", revision ${calc.revision}.\n\nStatement: ${statement}\nSeal: ${seal.hash}`,
     });
     await this.audit.commit(this.em, {
       calculationId: calc.id,
       actor: reviewer,
       action: 'locked',
-      detail: { sealHash: calc.seal.hash, supersedes: previous?.id ?? null },
+      detail: { sealHash: seal.hash, supersedes: previous?.id ?? null },
     });
     this.mail.kick();
     return toCalculationDto(calc);
@@ -306,21 +283,10 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    const { seal, analysis, engineVersion } = calc;
+    const { seal } = calc;
     if (!seal) throw new NotFoundException('This calculation is not locked, so it has no seal');
-    const recomputed =
-      analysis && engineVersion
-        ? sealHash({
-            inputs: calc.inputs,
-            analysis,
-            engineVersion,
-            reviewerName: seal.reviewerName,
-            licenseNumber: seal.licenseNumber,
-            licenseJurisdiction: seal.licenseJurisdiction,
-            statement: seal.statement,
-            lockedAt: seal.lockedAt,
-          })
-        : '';
+    const content = sealedContentOf(calc, seal);
+    const recomputed = content ? sealHash(content) : '';
     return { valid: recomputed === seal.hash, hash: seal.hash, recomputed, seal };
   }
 

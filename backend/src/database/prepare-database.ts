@@ -1,5 +1,6 @@
 import type { MikroORM } from '@mikro-orm/sqlite';
 import type { AppEnvironment } from '../config/environment';
+import { seedDemoCalculations } from './demo-calculations';
 import { seedAccounts, type SeedOutcome } from './seed-accounts';
 
 /** Applies the committed migrations, then seeds an empty database. Safe to run again. */
@@ -8,6 +9,9 @@ export async function prepareDatabase(
   env: Pick<AppEnvironment, 'demoMode' | 'adminEmail' | 'adminPassword'>,
 ): Promise<{ applied: string[]; seed: SeedOutcome }> {
   const applied = await orm.getMigrator().up();
-  const seed = await seedAccounts(orm.em.fork(), env);
+  const em = orm.em.fork();
+  const seed = await seedAccounts(em, env);
+  // The demo's buildings and calcs come with the demo accounts, on an empty database only.
+  if (seed === 'demo-accounts-created') await seedDemoCalculations(em);
   return { applied: applied.map((m) => m.name), seed };
 }

@@ -1,0 +1,52 @@
+import type { SealDto } from '@tiermode/shared-types';
+import type { User } from '../users/user.entity';
+import type { Calculation } from './calculation.entity';
+import { sealHash, type SealedContent } from './seal';
+
+/** The content a calc's seal covers, from what is stored, or null when there is no analysis. */
+export function sealedContentOf(
+  calc: Calculation,
+  seal: Omit<SealDto, 'hash' | 'reviewerId'>,
+): SealedContent | null {
+  if (!calc.analysis || !calc.engineVersion) return null;
+  return {
+    inputs: calc.inputs,
+    analysis: calc.analysis,
+    engineVersion: calc.engineVersion,
+    reviewerName: seal.reviewerName,
+    licenseNumber: seal.licenseNumber,
+    licenseJurisdiction: seal.licenseJurisdiction,
+    statement: seal.statement,
+    lockedAt: seal.lockedAt,
+  };
+}
+
+/**
+ * Locks a submitted calc: seals it with the reviewer's name, licence and statement and the time,
+ * and supersedes the locked revision it came from (loaded in `previousRevision`). The caller has
+ * checked who may lock and that the stored analysis is current.
+ */
+export function applyLock(
+  calc: Calculation,
+  reviewer: User,
+  statement: string,
+  lockedAt: Date,
+): SealDto {
+  const fields = {
+    reviewerName: reviewer.name,
+    licenseNumber: reviewer.licenseNumber ?? '',
+    licenseJurisdiction: reviewer.licenseJurisdiction ?? '',
+    statement,
+    lockedAt: lockedAt.toISOString(),
+  };
+  const content = sealedContentOf(calc, fields);
+  if (!content) throw new Error('A calculation without a stored analysis cannot be sealed');
+  const seal: SealDto = { hash: sealHash(content), reviewerId: reviewer.id, ...fields };
+  calc.seal = seal;
+  calc.status = 'locked';
+  calc.lockedAt = lockedAt;
+  calc.reviewer = reviewer;
+  const previous = calc.previousRevision;
+  if (previous && previous.status === 'locked') previous.status = 'superseded';
+  return seal;
+}

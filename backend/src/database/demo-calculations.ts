@@ -1,0 +1,124 @@
+import type { EntityManager } from '@mikro-orm/sqlite';
+import type { CalculationInputs } from '@tiermode/shared-types';
+import { analyse } from '../analysis/engine/analyse';
+import { asce7TwoPeriodSpectrum } from '../analysis/engine/spectrum-generators';
+import { appendAuditEvent } from '../audit/append-audit-event';
+import { Calculation } from '../calculations/calculation.entity';
+import { applyLock } from '../calculations/lock';
+import { Project } from '../projects/project.entity';
+import { User } from '../users/user.entity';
+
+/** An invented firm's two buildings, with invented storey data (SI base units). */
+function housingBlock(): CalculationInputs {
+  // Seven-storey reinforced concrete housing block: a taller ground storey, a lighter roof.
+  const masses = [640, 620, 620, 620, 610, 600, 470];
+  const stiffness = [2.1, 1.9, 1.8, 1.7, 1.5, 1.3, 1.1];
+  return {
+    storeys: masses.map((t, i) => ({
+      mass: t * 1000,
+      stiffness: stiffness[i] * 1e9,
+      height: i === 0 ? 4.0 : 3.1,
+    })),
+    spectrum: {
+      points: asce7TwoPeriodSpectrum({ sds: 1.0, sd1: 0.6, tl: 8 }),
+      interpolation: 'log-log',
+    },
+    dampingRatio: 0.05,
+  };
+}
+
+function laboratory(): CalculationInputs {
+  // Twelve-storey steel-framed laboratory: heavy plant floors, stiffness tapering up the height.
+  return {
+    storeys: Array.from({ length: 12 }, (_, i) => ({
+      mass: (i === 0 ? 900 : i === 11 ? 620 : 860) * 1000,
+      stiffness: (1.4 - (0.8 * i) / 11) * 1e9,
+      height: i === 0 ? 4.5 : 3.8,
+    })),
+    spectrum: {
+      points: asce7TwoPeriodSpectrum({ sds: 0.8, sd1: 0.45, tl: 6 }),
+      interpolation: 'log-log',
+    },
+    dampingRatio: 0.05,
+  };
+}
+
+/**
+ * The demo's projects and calcs, on a freshly seeded demo database: the housing block's calc is
+ * locked (it is in the library) and the laboratory's is submitted for review. Each step is on the
+ * audit trail, as if done through the app.
+ */
+export async function seedDemoCalculations(em: EntityManager): Promise<void> {
+  const designer = await em.findOneOrFail(User, { email: 'designer@tiermode.test' });
+  const reviewer = await em.findOneOrFail(User, { email: 'reviewer@tiermode.test' });
+  const start = Date.now() - 3 * 24 * 3600 * 1000;
+  let minute = 0;
+  const at = () => new Date(start + (minute += 7) * 60_000);
+
+  const make = async (
+    projectName: string,
+    site: string,
+    title: string,
+    inputs: CalculationInputs,
+  ) => {
+    const project = em.create(Project, { name: projectName, site, createdBy: designer });
+    project.members.add(designer);
+    const result = analyse(inputs);
+    const created = at();
+    const calc = em.create(Calculation, {
+      project,
+      title,
+      inputs,
+      author: designer,
+      inputsChangedAt: created,
+      analysis: result,
+      engineVersion: result.engineVersion,
+      analysedAt: at(),
+      status: 'submitted',
+      submittedAt: at(),
+    });
+    for (const [action, when] of [
+      ['created', created],
+      ['analysed', calc.analysedAt],
+      ['submitted', calc.submittedAt],
+    ] as const) {
+      await appendAuditEvent(em, {
+        calculationId: calc.id,
+        actor: designer,
+        action,
+        at: when ?? created,
+      });
+      await em.flush();
+    }
+    return calc;
+  };
+
+  const housing = await make(
+    'Alder Court housing block',
+    'Invented: a level plot on stiff soil at the edge of an invented town',
+    'Lateral modal analysis, north-south',
+    housingBlock(),
+  );
+  const lockedAt = at();
+  const seal = applyLock(
+    housing,
+    reviewer,
+    'Accepted as the calc of record for the permit set (demo).',
+    lockedAt,
+  );
+  await appendAuditEvent(em, {
+    calculationId: housing.id,
+    actor: reviewer,
+    action: 'locked',
+    detail: { sealHash: seal.hash, supersedes: null },
+    at: lockedAt,
+  });
+  await em.flush();
+
+  await make(
+    'Quarry Lane laboratory',
+    'Invented: a sloping former quarry site, on dense gravel',
+    'Lateral modal analysis, east-west',
+    laboratory(),
+  );
+}
