@@ -1,5 +1,5 @@
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
 
 describe('People (admin)', () => {
@@ -63,5 +63,66 @@ describe('People (admin)', () => {
       'Reviewer (licensed)',
     );
     await second.close();
+  });
+});
+
+describe('The account mail (new person)', () => {
+  let browser: Browser;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(() => browser?.close());
+
+  it('opens the mailed set-password link, chooses a password and signs in with it', async () => {
+    const base = inject('baseURL');
+    const login = await fetch(`${base}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: 'admin@tiermode.test', password: 'tiermode-demo' }),
+    });
+    const { accessToken } = (await login.json()) as { accessToken: string };
+    const headers = { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' };
+    const created = await fetch(`${base}/api/users`, {
+      method: 'POST',
+      headers,
+      body: JSON.stringify({
+        email: 'lena.moss@tiermode.test',
+        name: 'Lena Moss',
+        role: 'student',
+        password: 'first-one-2026-x',
+      }),
+    });
+    expect(created.status).toBe(201);
+    let link: string | undefined;
+    for (let i = 0; i < 50 && !link; i += 1) {
+      await new Promise((r) => setTimeout(r, 100));
+      const outbox = (await (await fetch(`${base}/api/mail/outbox`, { headers })).json()) as {
+        to: string;
+        status: string;
+        text: string;
+      }[];
+      link = /\/set-password\?token=[A-Za-z0-9_-]+/.exec(
+        outbox.find((m) => m.to === 'lena.moss@tiermode.test' && m.status === 'received')?.text ??
+          '',
+      )?.[0];
+    }
+    expect(link).toBeTruthy();
+
+    const { page, close } = await newPage(browser);
+    await page.goto(link as string);
+    await page.getByLabel('New password').fill('basalt-gusset-3030');
+    await page.getByLabel('The same again').fill('basalt-gusset-3030');
+    await screenshot(page, 'set-password');
+    await page.getByRole('button', { name: 'Save my password' }).click();
+    await page.waitForURL(/\/sign-in\?passwordSet=1/);
+    expect(await page.getByRole('status').textContent()).toBe(
+      'Your password is saved. Sign in with it.',
+    );
+    await page.getByLabel('Email').fill('lena.moss@tiermode.test');
+    await page.getByLabel('Password').fill('basalt-gusset-3030');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Welcome, Lena Moss' }).waitFor();
+    await close();
   });
 });

@@ -25,3 +25,9 @@ export interface ChangePasswordRequest {
   currentPassword: string;
   newPassword: string;
 }
+
+/** `POST /api/auth/set-password`: a new person chooses a password with the mailed one-time link. */
+export interface SetPasswordRequest {
+  token: string;
+  password: string;
+}

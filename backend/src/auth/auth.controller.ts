@@ -8,6 +8,7 @@ import type { User } from '../users/user.entity';
 import { AuthService } from './auth.service';
 import { ChangePasswordDto } from './dto/change-password.dto';
 import { LoginDto } from './dto/login.dto';
+import { SetPasswordDto } from './dto/set-password.dto';
 
 /** Every signed-in user may read and manage its own session. */
 const ownAccount = (ability: AppAbility) => ability.can('read', 'User');
@@ -45,5 +46,12 @@ export class AuthController {
     @Ip() ip: string,
   ): Promise<LoginResponse> {
     return this.auth.changePassword(user, body.currentPassword, body.newPassword, ip);
+  }
+
+  @Public()
+  @Post('set-password')
+  @HttpCode(204)
+  setPassword(@Body() body: SetPasswordDto, @Ip() ip: string): Promise<void> {
+    return this.auth.setPassword(body.token, body.password, ip);
   }
 }

@@ -1,9 +1,10 @@
 import { EntityManager } from '@mikro-orm/sqlite';
-import { Injectable, UnauthorizedException } from '@nestjs/common';
+import { BadRequestException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import type { LoginResponse, MeResponse } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { hashPassword, verifyPassword } from '../users/password-hasher';
+import { hashToken } from '../users/set-password-link';
 import { User } from '../users/user.entity';
 import { toUserDto } from '../users/user.mapper';
 import { JWT_LIFETIME_SECONDS, type TokenClaims } from './jwt-claims';
@@ -65,6 +66,31 @@ export class AuthService {
     user.sessionVersion += 1;
     await this.em.flush();
     return this.issue(user);
+  }
+
+  /**
+   * Sets the password of the account a one-time link was mailed for. The link works once and
+   * expires; a wrong or used one counts as a failed sign-in for throttling.
+   */
+  async setPassword(token: string, password: string, client: string): Promise<void> {
+    this.throttle.assertNotBlocked(client);
+    const user = await this.em.findOne(User, { setPasswordTokenHash: hashToken(token) });
+    if (
+      !user ||
+      !user.active ||
+      !user.setPasswordExpiresAt ||
+      user.setPasswordExpiresAt < new Date()
+    ) {
+      await this.throttle.recordFailure(client);
+      throw new BadRequestException([
+        'This set-password link is not valid, was used already, or has expired; ask your admin for a new one',
+      ]);
+    }
+    user.passwordHash = await hashPassword(password);
+    user.setPasswordTokenHash = null;
+    user.setPasswordExpiresAt = null;
+    user.sessionVersion += 1;
+    await this.em.flush();
   }
 
   private async issue(user: User): Promise<LoginResponse> {

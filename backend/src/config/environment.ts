@@ -49,6 +49,12 @@ class EnvironmentVariables {
   @IsOptional()
   @Matches(/^smtps?:\/\/\S+$/, { message: 'SMTP_URL must be an smtp:// or smtps:// URL' })
   SMTP_URL?: string;
+
+  @IsOptional()
+  @Matches(/^https?:\/\/[^\s/]+(\/\S*)?$/, {
+    message: 'PUBLIC_URL must be an http:// or https:// URL',
+  })
+  PUBLIC_URL?: string;
 }
 
 /** The resolved settings the app reads through ConfigService. */
@@ -61,6 +67,8 @@ export interface AppEnvironment {
   adminPassword?: string;
   /** Unset: the built-in local mail catcher receives every message. */
   smtpUrl?: string;
+  /** Where people reach the app, for links in mail (default http://localhost:PORT). */
+  publicUrl: string;
 }
 
 /**
@@ -76,6 +84,7 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
     ADMIN_EMAIL: emptyToUndefined(raw.ADMIN_EMAIL),
     ADMIN_PASSWORD: emptyToUndefined(raw.ADMIN_PASSWORD),
     SMTP_URL: emptyToUndefined(raw.SMTP_URL),
+    PUBLIC_URL: emptyToUndefined(raw.PUBLIC_URL),
   };
   const env = plainToInstance(EnvironmentVariables, picked);
   const errors = validateSync(env, { skipMissingProperties: false });
@@ -84,14 +93,16 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
     throw new Error(`Invalid environment:\n- ${lines.join('\n- ')}`);
   }
   const databasePath = resolve(env.DATABASE_PATH ?? DEFAULT_DATABASE_PATH);
+  const port = env.PORT ?? 3000;
   return {
-    port: env.PORT ?? 3000,
+    port,
     databasePath,
     jwtSecret: env.JWT_SECRET ?? persistedSecret(dirname(databasePath)),
     demoMode: (env.DEMO ?? 'on') === 'on',
     adminEmail: env.ADMIN_EMAIL,
     adminPassword: env.ADMIN_PASSWORD,
     smtpUrl: env.SMTP_URL,
+    publicUrl: (env.PUBLIC_URL ?? `http://localhost:${port}`).replace(/\/+$/, ''),
   };
 }
 

@@ -5,6 +5,7 @@ import { Migration20261201231817 } from './Migration20261201231817';
 import { Migration20261201232131 } from './Migration20261201232131';
 import { Migration20261201233354 } from './Migration20261201233354';
 import { Migration20261201233733 } from './Migration20261201233733';
+import { Migration20261201235500 } from './Migration20261201235500';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -14,4 +15,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201232131', class: Migration20261201232131 },
   { name: 'Migration20261201233354', class: Migration20261201233354 },
   { name: 'Migration20261201233733', class: Migration20261201233733 },
+  { name: 'Migration20261201235500', class: Migration20261201235500 },
 ];

@@ -4,7 +4,14 @@ import { ROLES, type Role } from '@tiermode/shared-types';
 
 @Entity({ tableName: 'users' })
 export class User {
-  [OptionalProps]?: 'active' | 'sessionVersion' | 'createdAt' | 'updatedAt' | 'version';
+  [OptionalProps]?:
+    | 'active'
+    | 'sessionVersion'
+    | 'setPasswordTokenHash'
+    | 'setPasswordExpiresAt'
+    | 'createdAt'
+    | 'updatedAt'
+    | 'version';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -43,6 +50,13 @@ export class User {
   /** ISO date YYYY-MM-DD: the licence is current through this day. */
   @Property({ type: 'string', length: 10, nullable: true })
   licenseExpiresOn: string | null = null;
+
+  /** SHA-256 of the one-time set-password token mailed to the user; cleared once used. */
+  @Property({ type: 'string', length: 64, nullable: true, hidden: true })
+  setPasswordTokenHash: string | null = null;
+
+  @Property({ type: 'datetime', nullable: true, hidden: true })
+  setPasswordExpiresAt: Date | null = null;
 
   @Property({ type: 'datetime' })
   createdAt: Date = new Date();

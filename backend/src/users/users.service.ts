@@ -2,12 +2,16 @@ import { subject } from '@casl/ability';
 import { ForbiddenError } from '@casl/ability';
 import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/sqlite';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import type { UserDto } from '@tiermode/shared-types';
 import { accessibleWhere } from '../authorization/accessible-where';
 import type { AppAbility } from '../authorization/app-ability';
+import type { AppEnvironment } from '../config/environment';
+import { MailService } from '../mail/mail.service';
 import type { CreateUserDto } from './dto/create-user.dto';
 import type { UpdateUserDto } from './dto/update-user.dto';
 import { hashPassword } from './password-hasher';
+import { newSetPasswordToken } from './set-password-link';
 import { User } from './user.entity';
 import { toUserDto } from './user.mapper';
 
@@ -15,7 +19,11 @@ const EMAIL_TAKEN = 'email is already used by another account';
 
 @Injectable()
 export class UsersService {
-  constructor(private readonly em: EntityManager) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly mail: MailService,
+    private readonly config: ConfigService<AppEnvironment, true>,
+  ) {}
 
   async list(ability: AppAbility): Promise<UserDto[]> {
     const where = accessibleWhere(ability, 'read', 'User');
@@ -36,7 +44,21 @@ export class UsersService {
       licenseJurisdiction: body.licenseJurisdiction ?? null,
       licenseExpiresOn: body.licenseExpiresOn ?? null,
     });
+    // The new person also gets a one-time link to choose a password of their own.
+    const link = newSetPasswordToken();
+    user.setPasswordTokenHash = link.tokenHash;
+    user.setPasswordExpiresAt = link.expiresAt;
+    const url = `${this.config.get('publicUrl', { infer: true })}/set-password?token=${link.token}`;
+    this.mail.queue(this.em, {
+      to: [user.email],
+      subject: 'Your Tiermode account',
+      text:
+        `${user.name}, an account has been made for you in Tiermode (${user.role}).\n\n` +
+        `Choose your password here; the link works once, until ${link.expiresAt.toISOString()}:\n${url}\n\n` +
+        'Your admin can also tell you the first password they set.',
+    });
     await this.em.flush();
+    this.mail.kick();
     return toUserDto(user);
   }
 

@@ -3,12 +3,14 @@ import { NotFound } from '@/components/errors/not-found';
 import { AnalysisRoute } from './routes/analysis';
 import { AppRoot } from './routes/app-root';
 import { HomeRoute } from './routes/home';
+import { SetPasswordRoute } from './routes/set-password';
 import { SignInRoute } from './routes/sign-in';
 import { UsersRoute } from './routes/users';
 import { VerificationRoute } from './routes/verification';
 
 const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInRoute /> },
+  { path: '/set-password', element: <SetPasswordRoute /> },
   {
     path: '/',
     element: <AppRoot />,

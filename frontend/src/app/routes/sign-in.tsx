@@ -34,6 +34,11 @@ export function SignInRoute() {
           <Typography color="text.secondary" sx={{ mb: 3 }}>
             Seismic modal analysis of shear buildings, from storey table to sealed calc of record.
           </Typography>
+          {params.get('passwordSet') && (
+            <Typography color="success.dark" sx={{ mb: 2 }} role="status">
+              Your password is saved. Sign in with it.
+            </Typography>
+          )}
           {params.get('ended') && (
             <Typography color="warning.dark" sx={{ mb: 2 }} role="status">
               Your session has ended. Please sign in again.
