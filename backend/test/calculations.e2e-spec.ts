@@ -1,23 +1,8 @@
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import type { App } from 'supertest/types';
+import { sampleInputs as inputs } from './support/fixtures';
 import { createTestApp, tokenFor, type DemoRole } from './support/test-app';
-
-const inputs = () => ({
-  storeys: [
-    { mass: 250000, stiffness: 3.5e8, height: 3.5 },
-    { mass: 250000, stiffness: 3.5e8, height: 3.5 },
-    { mass: 200000, stiffness: 3.0e8, height: 3.5 },
-  ],
-  spectrum: {
-    points: [
-      { period: 0, sa: 0.4 },
-      { period: 0.5, sa: 1 },
-      { period: 4, sa: 0.2 },
-    ],
-  },
-  dampingRatio: 0.05,
-});
 
 describe('Saved calculations (drafts)', () => {
   let app: INestApplication<App>;

@@ -1,25 +1,8 @@
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import type { App } from 'supertest/types';
-import { MailService } from '../src/mail/mail.service';
+import { sampleInputs as inputs, waitForMail } from './support/fixtures';
 import { createTestApp, tokenFor, type DemoRole } from './support/test-app';
-
-const inputs = () => ({
-  storeys: [
-    { mass: 300000, stiffness: 4e8, height: 4 },
-    { mass: 220000, stiffness: 3e8, height: 3.5 },
-  ],
-  spectrum: {
-    points: [
-      { period: 0, sa: 0.4 },
-      { period: 0.5, sa: 1 },
-      { period: 4, sa: 0.2 },
-    ],
-  },
-  dampingRatio: 0.05,
-});
-
-type Mail = { status: string; to: string; subject: string; text: string };
 
 describe('Mail through the local catcher', () => {
   let app: INestApplication<App>;
@@ -34,19 +17,8 @@ describe('Mail through the local catcher', () => {
   });
   afterAll(() => app.close());
 
-  async function received(subjectStart: string): Promise<Mail> {
-    for (let i = 0; i < 50; i += 1) {
-      await app.get(MailService).settled();
-      const outbox = (await http().get('/api/mail/outbox').set(as('admin')).expect(200))
-        .body as Mail[];
-      const found = outbox.find(
-        (m) => m.status === 'received' && m.subject.startsWith(subjectStart),
-      );
-      if (found) return found;
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    throw new Error(`No mail "${subjectStart}…" reached the catcher`);
-  }
+  const received = (subjectStart: string) =>
+    waitForMail(app, tokens.admin, (m) => m.subject.startsWith(subjectStart));
 
   it('tells reviewers of a submission and the author of a return and a lock, over SMTP', async () => {
     const projectId = (

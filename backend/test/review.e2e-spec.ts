@@ -3,23 +3,8 @@ import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { Calculation } from '../src/calculations/calculation.entity';
+import { sampleInputs as inputs } from './support/fixtures';
 import { createTestApp, signIn, tokenFor, type DemoRole } from './support/test-app';
-
-const inputs = () => ({
-  storeys: [
-    { mass: 300000, stiffness: 4e8, height: 4 },
-    { mass: 280000, stiffness: 3.6e8, height: 3.5 },
-    { mass: 220000, stiffness: 3e8, height: 3.5 },
-  ],
-  spectrum: {
-    points: [
-      { period: 0, sa: 0.4 },
-      { period: 0.5, sa: 1 },
-      { period: 4, sa: 0.2 },
-    ],
-  },
-  dampingRatio: 0.05,
-});
 
 describe('Review, lock, seal and revise', () => {
   let app: INestApplication<App>;

@@ -2,7 +2,7 @@ import { MikroORM } from '@mikro-orm/sqlite';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import type { App } from 'supertest/types';
-import { MailService } from '../src/mail/mail.service';
+import { waitForMail } from './support/fixtures';
 import { createTestApp, signIn, tokenFor } from './support/test-app';
 
 describe('The account-created mail and its set-password link', () => {
@@ -17,25 +17,11 @@ describe('The account-created mail and its set-password link', () => {
   afterAll(() => app.close());
 
   async function linkFor(email: string): Promise<string> {
-    for (let i = 0; i < 50; i += 1) {
-      await app.get(MailService).settled();
-      const outbox = (await http().get('/api/mail/outbox').set('Authorization', `Bearer ${admin}`))
-        .body as {
-        status: string;
-        to: string;
-        subject: string;
-        text: string;
-      }[];
-      const mail = outbox.find((m) => m.status === 'received' && m.to === email);
-      if (mail) {
-        expect(mail.subject).toBe('Your Tiermode account');
-        const match = /\/set-password\?token=([A-Za-z0-9_-]+)/.exec(mail.text);
-        if (!match) throw new Error('No link in the mail');
-        return match[1];
-      }
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    throw new Error(`No account mail reached ${email}`);
+    const mail = await waitForMail(app, admin, (m) => m.to === email);
+    expect(mail.subject).toBe('Your Tiermode account');
+    const match = /\/set-password\?token=([A-Za-z0-9_-]+)/.exec(mail.text);
+    if (!match) throw new Error('No link in the mail');
+    return match[1];
   }
 
   const create = (email: string) =>

@@ -1,18 +1,11 @@
 import { createHash } from 'node:crypto';
+import type { AuditEventDto } from '@tiermode/shared-types';
 import canonicalize from 'canonicalize';
 
 export const GENESIS_HASH = '0'.repeat(64);
 
-export interface AuditContent {
-  seq: number;
-  calculationId: string | null;
-  actorId: string;
-  actorName: string;
-  action: string;
-  detail: Record<string, unknown> | null;
-  at: string;
-  previousHash: string;
-}
+/** What an event's hash covers: everything in it but the hash itself. */
+export type AuditContent = Omit<AuditEventDto, 'hash'>;
 
 /** SHA-256 (hex) of the RFC 8785 canonical JSON of the event, its link included. */
 export function auditHash(content: AuditContent): string {

@@ -12,8 +12,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { AnalysisRequestDto } from '../../analysis/dto/analysis-request.dto';
-
-const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
+import { trim } from '../../common/validation/trim';
 
 export class CreateCalculationDto implements CreateCalculationRequest {
   @Transform(trim)

@@ -1,8 +1,7 @@
 import type { LockCalculationRequest, ReturnCalculationRequest } from '@tiermode/shared-types';
 import { Transform } from 'class-transformer';
 import { IsNotEmpty, IsString, MaxLength } from 'class-validator';
-
-const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
+import { trim } from '../../common/validation/trim';
 
 export class ReturnCalculationDto implements ReturnCalculationRequest {
   @Transform(trim)

@@ -13,8 +13,7 @@ import {
   Min,
   ValidateIf,
 } from 'class-validator';
-
-const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
+import { trim } from '../../common/validation/trim';
 
 export class CreateProjectDto implements CreateProjectRequest {
   @Transform(trim)

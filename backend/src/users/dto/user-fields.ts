@@ -1,4 +1,5 @@
 import { ROLES } from '@tiermode/shared-types';
+import { trim } from '../../common/validation/trim';
 import { applyDecorators } from '@nestjs/common';
 import { Transform } from 'class-transformer';
 import {
@@ -24,9 +25,7 @@ export const EmailField = () =>
 
 export const NameField = () =>
   applyDecorators(
-    Transform(({ value }: { value: unknown }) =>
-      typeof value === 'string' ? value.trim() : value,
-    ),
+    Transform(trim),
     IsString({ message: 'name must be a string' }),
     IsNotEmpty({ message: 'name must not be empty' }),
     MaxLength(200, { message: 'name must be at most 200 characters' }),

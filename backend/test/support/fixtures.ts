@@ -1,0 +1,44 @@
+import type { INestApplication } from '@nestjs/common';
+import type { CalculationInputs, MailMessageDto } from '@tiermode/shared-types';
+import request from 'supertest';
+import type { App } from 'supertest/types';
+import { MailService } from '../../src/mail/mail.service';
+
+/** A small invented three-storey building with a simple spectrum, for workflow tests. */
+export function sampleInputs(): CalculationInputs {
+  return {
+    storeys: [
+      { mass: 300000, stiffness: 4e8, height: 4 },
+      { mass: 280000, stiffness: 3.6e8, height: 3.5 },
+      { mass: 220000, stiffness: 3e8, height: 3.5 },
+    ],
+    spectrum: {
+      points: [
+        { period: 0, sa: 0.4 },
+        { period: 0.5, sa: 1 },
+        { period: 4, sa: 0.2 },
+      ],
+    },
+    dampingRatio: 0.05,
+  };
+}
+
+/** Waits (up to 5 s) for a mail the local catcher received that `match` picks out. */
+export async function waitForMail(
+  app: INestApplication<App>,
+  adminToken: string,
+  match: (mail: MailMessageDto) => boolean,
+): Promise<MailMessageDto> {
+  for (let i = 0; i < 50; i += 1) {
+    await app.get(MailService).settled();
+    const outbox = (
+      await request(app.getHttpServer())
+        .get('/api/mail/outbox')
+        .set('Authorization', `Bearer ${adminToken}`)
+    ).body as MailMessageDto[];
+    const found = outbox.find((m) => m.status === 'received' && match(m));
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error('The expected mail did not reach the catcher');
+}
