@@ -321,3 +321,95 @@ describe('The audit trail', () => {
     expect(broken.body).toMatchObject({ valid: false, brokenAt: analysed.seq });
   });
 });
+
+describe('Review comments tied to storeys or results', () => {
+  let app: INestApplication<App>;
+  const tokens = {} as Record<DemoRole, string>;
+  const http = () => request(app.getHttpServer());
+  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const)
+      tokens[role] = await tokenFor(app, role);
+  });
+  afterAll(() => app.close());
+
+  it('lets the reviewer comment on a storey, the designer answer and resolve, and nothing once locked', async () => {
+    const projectId = (
+      await http().post('/api/projects').set(as('designer')).send({ name: 'Comment project' })
+    ).body.id;
+    const calc = (
+      await http()
+        .post(`/api/projects/${projectId}/calculations`)
+        .set(as('designer'))
+        .send({ title: 'Commented', inputs: inputs() })
+    ).body;
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+
+    const commented = await http()
+      .post(`/api/calculations/${calc.id}/comments`)
+      .set(as('reviewer'))
+      .send({ body: 'Is this stiffness cracked or gross?', target: 'storey 2' })
+      .expect(201);
+    const comment = commented.body.comments[0];
+    expect(comment).toMatchObject({
+      target: 'storey 2',
+      resolved: false,
+      author: { name: 'Tomas Hale' },
+    });
+    await http()
+      .post(`/api/calculations/${calc.id}/comments`)
+      .set(as('designer'))
+      .send({ body: 'Cracked, 0.5 EI.' })
+      .expect(201);
+    await http()
+      .post(`/api/calculations/${calc.id}/comments`)
+      .set(as('student'))
+      .send({ body: 'Hi' })
+      .expect(403);
+    await http()
+      .post(`/api/calculations/${calc.id}/comments`)
+      .set(as('reviewer'))
+      .send({ body: ' ' })
+      .expect(400);
+
+    const resolved = await http()
+      .patch(`/api/comments/${comment.id}`)
+      .set(as('designer'))
+      .send({ resolved: true })
+      .expect(200);
+    expect(resolved.body.comments.find((c: { id: string }) => c.id === comment.id).resolved).toBe(
+      true,
+    );
+    await http()
+      .patch(`/api/comments/${comment.id}`)
+      .set(as('student'))
+      .send({ resolved: false })
+      .expect(403);
+    await http()
+      .patch(`/api/comments/${comment.id}`)
+      .set(as('designer'))
+      .send({ resolved: 'yes' })
+      .expect(400);
+
+    await http()
+      .post(`/api/calculations/${calc.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted.' })
+      .expect(200);
+    await http()
+      .post(`/api/calculations/${calc.id}/comments`)
+      .set(as('reviewer'))
+      .send({ body: 'Late' })
+      .expect(409);
+    await http()
+      .patch(`/api/comments/${comment.id}`)
+      .set(as('designer'))
+      .send({ resolved: false })
+      .expect(409);
+    const history = await http().get(`/api/calculations/${calc.id}/history`).set(as('designer'));
+    expect(history.body.map((e: { action: string }) => e.action)).toContain('comment resolved');
+  });
+});

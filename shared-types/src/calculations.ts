@@ -87,7 +87,21 @@ export interface ReviewCommentDto {
   id: string;
   author: { id: string; name: string };
   body: string;
+  /** What the comment is about, e.g. "storey 3" or "CQC base shear"; null for the whole calc. */
+  target: string | null;
+  resolved: boolean;
   createdAt: string;
+}
+
+/** `POST /api/calculations/:id/comments`. */
+export interface CreateCommentRequest {
+  body: string;
+  target?: string;
+}
+
+/** `PATCH /api/comments/:id`. */
+export interface UpdateCommentRequest {
+  resolved: boolean;
 }
 
 /** `GET /api/library`: a calc of record (locked or superseded), as the library lists it. */

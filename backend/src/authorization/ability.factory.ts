@@ -46,11 +46,15 @@ export class AbilityFactory {
           status: 'draft',
         });
         can('revise', 'Calculation', { projectMemberIds: user.id, status: 'locked' });
+        // Designers of the project answer and resolve the review's comments.
+        can('comment', 'Calculation', { projectMemberIds: user.id });
+        can('update', 'ReviewComment', { projectMemberIds: user.id });
         break;
       case 'reviewer':
         can('read', 'Project');
         can('read', 'Calculation');
         can(['comment', 'return'], 'Calculation');
+        can('update', 'ReviewComment');
         can('read', 'AuditTrail');
         if (isLicensed(user, today)) {
           can('lock', 'Calculation');

@@ -16,7 +16,18 @@ export interface CalculationRecord {
   projectMemberIds: string[];
 }
 
+/** The plain record a review comment's rules are checked against. */
+export interface ReviewCommentRecord {
+  id: string;
+  projectMemberIds: string[];
+}
+
 /** What a rule may be checked against: a subject name, or a record tagged with `subject()`. */
-type SubjectRecords = { User: User; Project: ProjectRecord; Calculation: CalculationRecord };
+type SubjectRecords = {
+  User: User;
+  Project: ProjectRecord;
+  Calculation: CalculationRecord;
+  ReviewComment: ReviewCommentRecord;
+};
 export type AppSubject = Subject | SubjectRecords[keyof SubjectRecords];
 export type AppAbility = MongoAbility<[Action, AppSubject], MongoQuery>;

@@ -32,6 +32,8 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
           id: c.id,
           author: { id: c.author.id, name: c.author.name },
           body: c.body,
+          target: c.target,
+          resolved: c.resolved,
           createdAt: c.createdAt.toISOString(),
         }))
       : [],

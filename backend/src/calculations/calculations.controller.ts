@@ -12,6 +12,7 @@ import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import type { User } from '../users/user.entity';
 import { CalculationsService } from './calculations.service';
 import { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
+import { CreateCommentDto, UpdateCommentDto } from './dto/comment.dto';
 import { LockCalculationDto, ReturnCalculationDto } from './dto/review.dto';
 
 @Controller()
@@ -130,5 +131,27 @@ export class CalculationsController {
     @Param('id', UuidParam('id')) id: string,
   ): Promise<AuditEventDto[]> {
     return this.calculations.history(ability, id);
+  }
+
+  @Post('calculations/:id/comments')
+  @CheckPolicies((ability) => ability.can('comment', 'Calculation'))
+  comment(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+    @Body() body: CreateCommentDto,
+  ): Promise<CalculationDto> {
+    return this.calculations.addComment(ability, user, id, body.body, body.target ?? null);
+  }
+
+  @Patch('comments/:id')
+  @CheckPolicies((ability) => ability.can('update', 'ReviewComment'))
+  resolveComment(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+    @Body() body: UpdateCommentDto,
+  ): Promise<CalculationDto> {
+    return this.calculations.resolveComment(ability, user, id, body.resolved);
   }
 }

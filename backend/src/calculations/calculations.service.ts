@@ -266,6 +266,71 @@ export class CalculationsService {
     return toCalculationDto(await this.load(draft.id));
   }
 
+  /** A comment on a calc that is not yet of record, tied to a storey or result when given. */
+  async addComment(
+    ability: AppAbility,
+    author: User,
+    id: string,
+    body: string,
+    target: string | null,
+  ): Promise<CalculationDto> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    this.assertNotOfRecord(calc);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'comment',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    const comment = this.em.create(ReviewComment, { calculation: calc, author, body, target });
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor: author,
+      action: 'commented',
+      detail: { commentId: comment.id, target },
+    });
+    await this.em.populate(calc, ['comments.author'], { refresh: true });
+    return toCalculationDto(calc);
+  }
+
+  /** Marks a comment resolved (or open again). */
+  async resolveComment(
+    ability: AppAbility,
+    actor: User,
+    commentId: string,
+    resolved: boolean,
+  ): Promise<CalculationDto> {
+    const comment = await this.em.findOne(ReviewComment, { id: commentId });
+    if (!comment) throw new NotFoundException(`No comment with id ${commentId}`);
+    const calc = await this.load(comment.calculation.id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    this.assertNotOfRecord(calc);
+    const record = { id: comment.id, projectMemberIds: calculationSubject(calc).projectMemberIds };
+    ForbiddenError.from(ability).throwUnlessCan('update', subject('ReviewComment', record));
+    comment.resolved = resolved;
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor,
+      action: resolved ? 'comment resolved' : 'comment reopened',
+      detail: { commentId },
+    });
+    await this.em.populate(calc, ['comments.author'], { refresh: true });
+    return toCalculationDto(calc);
+  }
+
+  private assertNotOfRecord(calc: Calculation): void {
+    if (calc.status === 'locked' || calc.status === 'superseded') {
+      throw new ConflictException(
+        `This calculation is ${calc.status} (sealed ${calc.seal?.hash.slice(0, 12) ?? ''}…) and can never change`,
+      );
+    }
+  }
+
   /** The audit trail of one calculation. */
   async history(ability: AppAbility, id: string) {
     const calc = await this.load(id);

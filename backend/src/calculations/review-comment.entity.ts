@@ -6,7 +6,7 @@ import { Calculation } from './calculation.entity';
 /** A reviewer's comment on a calculation (a return always carries one). */
 @Entity({ tableName: 'review_comments' })
 export class ReviewComment {
-  [OptionalProps]?: 'createdAt';
+  [OptionalProps]?: 'target' | 'resolved' | 'createdAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -19,6 +19,13 @@ export class ReviewComment {
 
   @Property({ type: 'text' })
   body!: string;
+
+  /** What it is about, e.g. "storey 3" or "CQC base shear"; null for the whole calc. */
+  @Property({ type: 'string', length: 200, nullable: true })
+  target: string | null = null;
+
+  @Property({ type: 'boolean' })
+  resolved: boolean = false;
 
   @Property({ type: 'datetime' })
   createdAt: Date = new Date();

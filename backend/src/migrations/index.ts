@@ -6,6 +6,7 @@ import { Migration20261201232131 } from './Migration20261201232131';
 import { Migration20261201233354 } from './Migration20261201233354';
 import { Migration20261201233733 } from './Migration20261201233733';
 import { Migration20261201235500 } from './Migration20261201235500';
+import { Migration20261202000500 } from './Migration20261202000500';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -16,4 +17,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201233354', class: Migration20261201233354 },
   { name: 'Migration20261201233733', class: Migration20261201233733 },
   { name: 'Migration20261201235500', class: Migration20261201235500 },
+  { name: 'Migration20261202000500', class: Migration20261202000500 },
 ];

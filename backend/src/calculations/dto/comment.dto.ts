@@ -1,0 +1,23 @@
+import type { CreateCommentRequest, UpdateCommentRequest } from '@tiermode/shared-types';
+import { Transform } from 'class-transformer';
+import { IsBoolean, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { trim } from '../../common/validation/trim';
+
+export class CreateCommentDto implements CreateCommentRequest {
+  @Transform(trim)
+  @IsString({ message: 'body must be a string' })
+  @IsNotEmpty({ message: 'body must not be empty' })
+  @MaxLength(10_000, { message: 'body must be at most 10000 characters' })
+  body!: string;
+
+  @IsOptional()
+  @Transform(trim)
+  @IsString({ message: 'target must be a string, e.g. "storey 3"' })
+  @MaxLength(200, { message: 'target must be at most 200 characters' })
+  target?: string;
+}
+
+export class UpdateCommentDto implements UpdateCommentRequest {
+  @IsBoolean({ message: 'resolved must be true or false' })
+  resolved!: boolean;
+}
