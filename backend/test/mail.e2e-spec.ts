@@ -1,24 +1,10 @@
-import type { INestApplication } from '@nestjs/common';
-import request from 'supertest';
-import type { App } from 'supertest/types';
-import { sampleInputs as inputs, waitForMail } from './support/fixtures';
-import { createTestApp, tokenFor, type DemoRole } from './support/test-app';
+import { sampleInputs as inputs, useSignedInApp, waitForMail } from './support/fixtures';
 
 describe('Mail through the local catcher', () => {
-  let app: INestApplication<App>;
-  const tokens = {} as Record<DemoRole, string>;
-  const http = () => request(app.getHttpServer());
-  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
-
-  beforeAll(async () => {
-    app = await createTestApp();
-    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const)
-      tokens[role] = await tokenFor(app, role);
-  });
-  afterAll(() => app.close());
+  const { state, http, as } = useSignedInApp();
 
   const received = (subjectStart: string) =>
-    waitForMail(app, tokens.admin, (m) => m.subject.startsWith(subjectStart));
+    waitForMail(state.app, state.tokens.admin, (m) => m.subject.startsWith(subjectStart));
 
   it('tells reviewers of a submission and the author of a return and a lock, over SMTP', async () => {
     const projectId = (

@@ -3,7 +3,7 @@ import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { Calculation } from '../src/calculations/calculation.entity';
-import { sampleInputs as inputs } from './support/fixtures';
+import { sampleInputs as inputs, useSignedInApp } from './support/fixtures';
 import { createTestApp, signIn, tokenFor, type DemoRole } from './support/test-app';
 
 describe('Review, lock, seal and revise', () => {
@@ -198,17 +198,7 @@ describe('Review, lock, seal and revise', () => {
 });
 
 describe('GET /api/library', () => {
-  let app: INestApplication<App>;
-  const tokens = {} as Record<DemoRole, string>;
-  const http = () => request(app.getHttpServer());
-  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
-
-  beforeAll(async () => {
-    app = await createTestApp();
-    for (const role of ['designer', 'reviewer', 'student'] as const)
-      tokens[role] = await tokenFor(app, role);
-  });
-  afterAll(() => app.close());
+  const { http, as } = useSignedInApp();
 
   it('lists locked calcs for a student, and never a draft or a submitted one', async () => {
     const projectId = (
@@ -254,17 +244,7 @@ describe('GET /api/library', () => {
 });
 
 describe('The audit trail', () => {
-  let app: INestApplication<App>;
-  const tokens = {} as Record<DemoRole, string>;
-  const http = () => request(app.getHttpServer());
-  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
-
-  beforeAll(async () => {
-    app = await createTestApp();
-    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const)
-      tokens[role] = await tokenFor(app, role);
-  });
-  afterAll(() => app.close());
+  const { state, http, as } = useSignedInApp();
 
   it('records each step as a chained event, verifies, and finds a tampered event', async () => {
     const projectId = (
@@ -313,7 +293,7 @@ describe('The audit trail', () => {
     );
 
     const analysed = history.body[1];
-    await app
+    await state.app
       .get(MikroORM)
       .em.getConnection()
       .execute(`update audit_events set actor_name = 'Someone else' where seq = ?`, [analysed.seq]);
@@ -323,17 +303,7 @@ describe('The audit trail', () => {
 });
 
 describe('Review comments tied to storeys or results', () => {
-  let app: INestApplication<App>;
-  const tokens = {} as Record<DemoRole, string>;
-  const http = () => request(app.getHttpServer());
-  const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
-
-  beforeAll(async () => {
-    app = await createTestApp();
-    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const)
-      tokens[role] = await tokenFor(app, role);
-  });
-  afterAll(() => app.close());
+  const { http, as } = useSignedInApp();
 
   it('lets the reviewer comment on a storey, the designer answer and resolve, and nothing once locked', async () => {
     const projectId = (

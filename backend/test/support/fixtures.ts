@@ -3,6 +3,7 @@ import type { CalculationInputs, MailMessageDto } from '@tiermode/shared-types';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { MailService } from '../../src/mail/mail.service';
+import { createTestApp, tokenFor, type DemoRole } from './test-app';
 
 /** A small invented three-storey building with a simple spectrum, for workflow tests. */
 export function sampleInputs(): CalculationInputs {
@@ -41,4 +42,25 @@ export async function waitForMail(
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error('The expected mail did not reach the catcher');
+}
+
+/**
+ * For a describe block: the app on its own fresh database, started before the block's tests and
+ * closed after, with a token for each demo role and request helpers.
+ */
+export function useSignedInApp() {
+  const state = {} as { app: INestApplication<App>; tokens: Record<DemoRole, string> };
+  beforeAll(async () => {
+    state.app = await createTestApp();
+    state.tokens = {} as Record<DemoRole, string>;
+    for (const role of ['admin', 'designer', 'reviewer', 'student'] as const) {
+      state.tokens[role] = await tokenFor(state.app, role);
+    }
+  });
+  afterAll(() => state.app.close());
+  return {
+    state,
+    http: () => request(state.app.getHttpServer()),
+    as: (role: DemoRole) => ({ Authorization: `Bearer ${state.tokens[role]}` }),
+  };
 }
