@@ -1,11 +1,6 @@
-import type {
-  AnalysisRequest,
-  AnalysisResponse,
-  CombinedResponse,
-  ModalResponse,
-  ModeResult,
-} from '@tiermode/shared-types';
-import { combineAbs, combineCqc, combineSrss, correlationMatrix } from './combination';
+import type { AnalysisRequest, AnalysisResponse, ModeResult } from '@tiermode/shared-types';
+import { correlationMatrix } from './combination';
+import { combineModalResponses } from './combined-response';
 import { modalResponse } from './modal-response';
 import { selectModeCount } from './mode-selection';
 import { naturalModes, type Mode } from './modes';
@@ -104,45 +99,18 @@ export function analyse(
     used.map((m) => m.circularFrequency),
     dampingRatio,
   );
-  const rows = modes.map((m) => flatten(m.response));
-  const n = storeys.length;
-  const unflatten = (values: number[]): CombinedResponse => {
-    const drift = values.slice(n, 2 * n);
-    return {
-      displacement: values.slice(0, n),
-      drift,
-      driftRatio: drift.map((d, i) => d / storeys[i].height),
-      floorForce: values.slice(2 * n, 3 * n),
-      storeyShear: values.slice(3 * n, 4 * n),
-      overturningMoment: values.slice(4 * n, 5 * n),
-      baseShear: values[5 * n],
-      baseMoment: values[5 * n + 1],
-    };
-  };
   const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
   return {
     totalMass,
     modes,
     availableModes: allModes.length,
-    combined: {
-      srss: unflatten(combineSrss(rows)),
-      cqc: unflatten(combineCqc(rows, correlation)),
-      abs: unflatten(combineAbs(rows)),
-    },
+    combined: combineModalResponses(
+      storeys,
+      modes.map((m) => m.response),
+      correlation,
+    ),
     correlation,
     warnings,
     engineVersion: ENGINE_VERSION,
   };
-}
-
-/** One row per mode with every quantity side by side, so each is combined on its own in one pass. */
-function flatten(r: ModalResponse): Float64Array {
-  const n = r.displacement.length;
-  const row = new Float64Array(5 * n + 2);
-  [r.displacement, r.drift, r.floorForce, r.storeyShear, r.overturningMoment].forEach(
-    (quantity, q) => row.set(quantity, q * n),
-  );
-  row[5 * n] = r.baseShear;
-  row[5 * n + 1] = r.overturningMoment[0];
-  return row;
 }

@@ -17,7 +17,7 @@ export interface Mode {
   /** Normalised to +1 at the roof (index N-1). */
   shape: number[];
   /** Normalised so that phi^T M phi = 1 (same sign as `shape`). */
-  massNormalisedShape: number[];
+  massNormalisedShape: Float64Array;
   /** Gamma = phi^T M r / phi^T M phi for the roof-normalised shape, r = ones. */
   participationFactor: number;
   /** M* = (phi^T M r)^2 / (phi^T M phi), kg; independent of the normalisation. */
@@ -66,11 +66,12 @@ export function modesFromEigenpairs(
   storeys: readonly Storey[],
   rootMass: readonly number[],
   values: readonly number[],
-  vectors: readonly (readonly number[])[],
+  vectors: readonly ArrayLike<number>[],
 ): Mode[] {
   const n = storeys.length;
   const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
 
+  const masses = storeys.map((s) => s.mass);
   let cumulative = 0;
   return values.map((omegaSquared, j) => {
     if (!(omegaSquared > 0) || !Number.isFinite(omegaSquared)) {
@@ -79,15 +80,18 @@ export function modesFromEigenpairs(
     const x = vectors[j];
     // The roof component of an eigenvector of an unreduced tridiagonal matrix is never zero.
     const sign = x[n - 1] < 0 ? -1 : 1;
-    const massNormalisedShape = x.map((xi, i) => (sign * xi) / rootMass[i]);
+    const massNormalisedShape = new Float64Array(n);
+    for (let i = 0; i < n; i += 1) massNormalisedShape[i] = (sign * x[i]) / rootMass[i];
     const roof = massNormalisedShape[n - 1];
-    const shape = massNormalisedShape.map((p) => p / roof);
+    const shape = new Array<number>(n);
     let l = 0; // phi^T M r
     let mn = 0; // phi^T M phi
-    shape.forEach((p, i) => {
-      l += storeys[i].mass * p;
-      mn += storeys[i].mass * p * p;
-    });
+    for (let i = 0; i < n; i += 1) {
+      const p = massNormalisedShape[i] / roof;
+      shape[i] = p;
+      l += masses[i] * p;
+      mn += masses[i] * p * p;
+    }
     const effectiveMass = (l * l) / mn;
     const effectiveMassRatio = effectiveMass / totalMass;
     cumulative += effectiveMassRatio;

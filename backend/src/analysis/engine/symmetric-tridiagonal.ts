@@ -17,12 +17,20 @@
 export interface TridiagonalEigen {
   /** Ascending. */
   values: number[];
-  /** vectors[j] is the unit eigenvector of values[j]. */
-  vectors: number[][];
+  /**
+   * vectors[j] is the unit eigenvector of values[j]: views into one typed block, which the
+   * garbage collector never has to copy (it is hundreds of thousands of numbers for a tall building).
+   */
+  vectors: Float64Array[];
 }
 
 const EPS = Number.EPSILON;
 const MAX_QL_ITERATIONS = 60;
+/**
+ * From an eigenvalue accurate to eps*norm one solve already reduces every other component by
+ * gap/(eps*norm); the second is the extra step dstein takes after its growth test passes.
+ */
+const INVERSE_ITERATIONS = 2;
 
 /**
  * @param diagonal a_1..a_n
@@ -45,6 +53,15 @@ export function symmetricTridiagonalEigen(
   return { values, vectors };
 }
 
+/**
+ * sqrt(a^2 + b^2) without overflow or underflow: the plain formula where the squares are safely
+ * in range (Math.hypot is several times slower in V8, and this sits in the innermost QL loop).
+ */
+function radius(a: number, b: number): number {
+  const squares = a * a + b * b;
+  return squares > 1e-290 && squares < 1e290 ? Math.sqrt(squares) : Math.hypot(a, b);
+}
+
 function eigenvaluesQL(diagonal: readonly number[], offDiagonal: readonly number[]): number[] {
   const n = diagonal.length;
   const d = Float64Array.from(diagonal);
@@ -63,7 +80,7 @@ function eigenvaluesQL(diagonal: readonly number[], offDiagonal: readonly number
           throw new RangeError('the eigenvalue iteration did not converge');
         }
         let g = (d[l + 1] - d[l]) / (2 * e[l]);
-        let r = Math.hypot(g, 1);
+        let r = radius(g, 1);
         g = d[m] - d[l] + e[l] / (g + (g >= 0 ? Math.abs(r) : -Math.abs(r)));
         let s = 1;
         let c = 1;
@@ -72,7 +89,7 @@ function eigenvaluesQL(diagonal: readonly number[], offDiagonal: readonly number
         for (i = m - 1; i >= l; i -= 1) {
           const f = s * e[i];
           const b = c * e[i];
-          r = Math.hypot(f, g);
+          r = radius(f, g);
           e[i + 1] = r;
           if (r === 0) {
             d[i + 1] -= p;
@@ -101,15 +118,16 @@ function eigenvectorsByInverseIteration(
   diagonal: readonly number[],
   offDiagonal: readonly number[],
   values: readonly number[],
-): number[][] {
+): Float64Array[] {
   const n = diagonal.length;
-  if (n === 1) return [[1]];
+  if (n === 1) return [Float64Array.of(1)];
   let norm = 0;
+  // The infinity norm (largest absolute row sum); reads stay inside the arrays, which V8 needs
+  // to keep this loop fast.
   for (let i = 0; i < n; i += 1) {
-    norm = Math.max(
-      norm,
-      Math.abs(diagonal[i]) + Math.abs(offDiagonal[i - 1] ?? 0) + Math.abs(offDiagonal[i] ?? 0),
-    );
+    const before = i > 0 ? Math.abs(offDiagonal[i - 1]) : 0;
+    const after = i < n - 1 ? Math.abs(offDiagonal[i]) : 0;
+    norm = Math.max(norm, Math.abs(diagonal[i]) + before + after);
   }
   // Inverse iteration from an eigenvalue accurate to eps*norm gives a vector whose angle to its
   // neighbours' is about eps*norm/gap. Vectors whose eigenvalues lie closer than 1e-6*norm are
@@ -118,7 +136,8 @@ function eigenvectorsByInverseIteration(
   // one large cluster and the work into O(n^3).)
   const clusterGap = 1e-6 * norm;
   const solver = new ShiftedTridiagonalSolver(diagonal, offDiagonal, norm);
-  const vectors: number[][] = [];
+  const block = new Float64Array(n * n);
+  const vectors: Float64Array[] = [];
   let clusterStart = 0;
   for (let j = 0; j < n; j += 1) {
     if (j > 0 && values[j] - values[j - 1] > clusterGap) clusterStart = j;
@@ -128,45 +147,50 @@ function eigenvectorsByInverseIteration(
         ? values[j - 1] + 10 * EPS * norm
         : values[j];
     solver.factor(shift);
-    let x = startingVector(n, j);
-    for (let iteration = 0; iteration < 3; iteration += 1) {
-      x = solver.solve(x);
+    const x = block.subarray(j * n, (j + 1) * n);
+    startingVector(x, j);
+    for (let iteration = 0; iteration < INVERSE_ITERATIONS; iteration += 1) {
+      solver.solveInPlace(x);
       for (let k = clusterStart; k < j; k += 1) subtractProjection(x, vectors[k]);
       normalise(x);
     }
-    vectors.push(Array.from(x));
+    vectors.push(x);
   }
   return vectors;
 }
 
 /** A deterministic start with no special relation to any eigenvector. */
-function startingVector(n: number, seed: number): Float64Array {
-  const x = new Float64Array(n);
+function startingVector(x: Float64Array, seed: number): void {
+  const n = x.length;
   let state = (seed * 2654435761 + 12345) >>> 0;
   for (let i = 0; i < n; i += 1) {
     state = (state * 1664525 + 1013904223) >>> 0;
     x[i] = 0.5 + state / 2 ** 32;
   }
-  return x;
 }
 
-function subtractProjection(x: Float64Array, unit: readonly number[]): void {
+function subtractProjection(x: Float64Array, unit: Float64Array): void {
   let dot = 0;
   for (let i = 0; i < x.length; i += 1) dot += x[i] * unit[i];
   for (let i = 0; i < x.length; i += 1) x[i] -= dot * unit[i];
 }
 
 function normalise(x: Float64Array): void {
-  let largest = 0;
-  for (let i = 0; i < x.length; i += 1) largest = Math.max(largest, Math.abs(x[i]));
-  if (largest === 0) throw new RangeError('inverse iteration produced a zero vector');
   let sum = 0;
-  for (let i = 0; i < x.length; i += 1) {
-    x[i] /= largest;
-    sum += x[i] * x[i];
+  for (let i = 0; i < x.length; i += 1) sum += x[i] * x[i];
+  if (!(sum > 1e-290 && sum < 1e290)) {
+    // Out of the range where squares are safe: scale by the largest entry first.
+    let largest = 0;
+    for (let i = 0; i < x.length; i += 1) largest = Math.max(largest, Math.abs(x[i]));
+    if (largest === 0 || !Number.isFinite(largest)) {
+      throw new RangeError('inverse iteration produced a zero or unbounded vector');
+    }
+    for (let i = 0; i < x.length; i += 1) x[i] /= largest;
+    sum = 0;
+    for (let i = 0; i < x.length; i += 1) sum += x[i] * x[i];
   }
-  const length = Math.sqrt(sum);
-  for (let i = 0; i < x.length; i += 1) x[i] /= length;
+  const factor = 1 / Math.sqrt(sum);
+  for (let i = 0; i < x.length; i += 1) x[i] *= factor;
 }
 
 /**
@@ -180,6 +204,8 @@ class ShiftedTridiagonalSolver {
   private readonly u3: Float64Array; // second superdiagonal of U (from interchanges)
   private readonly multipliers: Float64Array;
   private readonly swapped: Uint8Array;
+  /** 1 / the diagonal of U, a pivot below `tiny` taken as `tiny`: the solve then multiplies. */
+  private readonly inversePivots: Float64Array;
   private readonly tiny: number;
 
   constructor(
@@ -193,6 +219,7 @@ class ShiftedTridiagonalSolver {
     this.u3 = new Float64Array(this.n);
     this.multipliers = new Float64Array(this.n);
     this.swapped = new Uint8Array(this.n);
+    this.inversePivots = new Float64Array(this.n);
     this.tiny = EPS * norm || EPS;
   }
 
@@ -232,11 +259,14 @@ class ShiftedTridiagonalSolver {
       }
     }
     u1[n - 1] = a === 0 ? this.tiny : a;
+    // Divisions here are independent of each other and overlap; in the solve they would not.
+    const { inversePivots, tiny } = this;
+    for (let i = 0; i < n; i += 1) inversePivots[i] = 1 / (Math.abs(u1[i]) < tiny ? tiny : u1[i]);
   }
 
-  solve(rhs: Float64Array): Float64Array {
-    const { n, u1, u2, u3, multipliers, swapped } = this;
-    const y = Float64Array.from(rhs);
+  /** Overwrites y with (T - shift I)^-1 y. */
+  solveInPlace(y: Float64Array): void {
+    const { n, u2, u3, multipliers, swapped, inversePivots } = this;
     for (let i = 0; i < n - 1; i += 1) {
       if (swapped[i]) {
         const t = y[i];
@@ -246,13 +276,10 @@ class ShiftedTridiagonalSolver {
         y[i + 1] -= multipliers[i] * y[i];
       }
     }
-    for (let i = n - 1; i >= 0; i -= 1) {
-      let sum = y[i];
-      if (i + 1 < n) sum -= u2[i] * y[i + 1];
-      if (i + 2 < n) sum -= u3[i] * y[i + 2];
-      const pivot = Math.abs(u1[i]) < this.tiny ? this.tiny : u1[i];
-      y[i] = sum / pivot;
+    y[n - 1] *= inversePivots[n - 1];
+    if (n > 1) y[n - 2] = (y[n - 2] - u2[n - 2] * y[n - 1]) * inversePivots[n - 2];
+    for (let i = n - 3; i >= 0; i -= 1) {
+      y[i] = (y[i] - u2[i] * y[i + 1] - u3[i] * y[i + 2]) * inversePivots[i];
     }
-    return y;
   }
 }
