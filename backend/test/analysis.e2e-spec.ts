@@ -1,5 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
+import { ENGINE_VERSION } from '../src/analysis/engine/analyse';
 import type { App } from 'supertest/types';
 import { createTestApp, tokenFor } from './support/test-app';
 
@@ -77,7 +78,7 @@ describe('POST /api/analysis', () => {
     expect(body.modes[0].shape[4]).toBe(1);
     expect(body.correlation).toHaveLength(5);
     expect(Array.isArray(body.warnings)).toBe(true);
-    expect(body.engineVersion).toBe('1.0.0');
+    expect(body.engineVersion).toBe(ENGINE_VERSION);
     expect(body.modes[4].cumulativeMassRatio).toBeCloseTo(1, 12);
   });
 

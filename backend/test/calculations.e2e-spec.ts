@@ -1,5 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
+import { ENGINE_VERSION } from '../src/analysis/engine/analyse';
 import type { App } from 'supertest/types';
 import { sampleInputs as inputs } from './support/fixtures';
 import { createTestApp, tokenFor, type DemoRole } from './support/test-app';
@@ -50,7 +51,7 @@ describe('Saved calculations (drafts)', () => {
     expect(analysed.body.modes).toHaveLength(3);
     const stored = await http().get(`/api/calculations/${calc.id}`).set(as('reviewer')).expect(200);
     expect(stored.body.analysis.combined.cqc.baseShear).toBe(analysed.body.combined.cqc.baseShear);
-    expect(stored.body).toMatchObject({ engineVersion: '1.0.0', analysisStale: false });
+    expect(stored.body).toMatchObject({ engineVersion: ENGINE_VERSION, analysisStale: false });
     const edited = await http()
       .patch(`/api/calculations/${calc.id}`)
       .set(as('designer'))

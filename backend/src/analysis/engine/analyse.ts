@@ -8,7 +8,7 @@ import { assertStoreys, type Storey } from './shear-building';
 import { assertSpectrum, spectralAcceleration } from './spectrum';
 
 /** Bumped whenever a change to the engine could change a number it returns. */
-export const ENGINE_VERSION = '1.0.0';
+export const ENGINE_VERSION = '1.0.1';
 
 /** EN 1998-1 4.3.3.3.1 asks the modes used to reach 90% of the mass. */
 export const MIN_CUMULATIVE_MASS_RATIO = 0.9;

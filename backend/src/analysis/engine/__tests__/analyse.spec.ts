@@ -1,4 +1,4 @@
-import { analyse } from '../analyse';
+import { analyse, ENGINE_VERSION } from '../analyse';
 import { storeyStiffnessFromColumns } from '../column-stiffness';
 import { STANDARD_GRAVITY } from '../modal-response';
 import { randomBuilding, seededRandom, uniformBuilding } from './buildings';
@@ -17,7 +17,7 @@ describe('analyse', () => {
   it('returns every mode and the fields of the API contract', () => {
     expect(result.modes).toHaveLength(8);
     expect(result.availableModes).toBe(8);
-    expect(result.engineVersion).toBe('1.0.0');
+    expect(result.engineVersion).toBe(ENGINE_VERSION);
     expect(result.correlation).toHaveLength(8);
     expect(Object.keys(result.combined.cqc).sort()).toEqual([
       'baseMoment',
