@@ -1,4 +1,5 @@
 import type { AnalysisRequest, AnalysisResponse } from './analysis';
+import type { CodeBasis } from './projects';
 
 export const CALCULATION_STATUSES = ['draft', 'submitted', 'locked', 'superseded'] as const;
 export type CalculationStatus = (typeof CALCULATION_STATUSES)[number];
@@ -104,6 +105,38 @@ export interface UpdateCommentRequest {
   resolved: boolean;
 }
 
+/** The items of `GET /api/calculations`: a calc as lists and the dashboard show it. */
+export interface CalculationSummaryDto {
+  id: string;
+  projectId: string;
+  projectName: string;
+  title: string;
+  revision: number;
+  status: CalculationStatus;
+  storeyCount: number;
+  author: { id: string; name: string };
+  reviewer: { id: string; name: string } | null;
+  analysisStale: boolean;
+  /** ISO times. */
+  submittedAt: string | null;
+  returnedAt: string | null;
+  lockedAt: string | null;
+  updatedAt: string;
+}
+
+/**
+ * The query of `GET /api/calculations`, every part optional: `status` a comma-separated list,
+ * `author=me` the caller's own, `notAuthor=me` everyone else's, `projectId` one project's,
+ * `limit` at most 200 (default 100). Newest change first.
+ */
+export interface CalculationListQuery {
+  status?: string;
+  author?: 'me';
+  notAuthor?: 'me';
+  projectId?: string;
+  limit?: number;
+}
+
 /** `GET /api/library`: a calc of record (locked or superseded), as the library lists it. */
 export interface LibraryEntryDto {
   id: string;
@@ -112,6 +145,8 @@ export interface LibraryEntryDto {
   status: 'locked' | 'superseded';
   projectId: string;
   projectName: string;
+  codeBasis: CodeBasis;
+  structuralSystem: string | null;
   storeyCount: number;
   /** m, from the base to the roof */
   buildingHeight: number;

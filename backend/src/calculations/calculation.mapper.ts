@@ -19,7 +19,7 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     engineVersion: calc.engineVersion,
     inputsChangedAt: calc.inputsChangedAt.toISOString(),
     analysedAt: calc.analysedAt?.toISOString() ?? null,
-    analysisStale: calc.analysedAt === null || calc.analysedAt < calc.inputsChangedAt,
+    analysisStale: isAnalysisStale(calc),
     author: { id: calc.author.id, name: calc.author.name },
     reviewer: calc.reviewer ? { id: calc.reviewer.id, name: calc.reviewer.name } : null,
     submittedAt: calc.submittedAt?.toISOString() ?? null,
@@ -41,6 +41,11 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     updatedAt: calc.updatedAt.toISOString(),
     version: calc.version,
   };
+}
+
+/** True when the inputs changed after the stored analysis was made (or none was made). */
+export function isAnalysisStale(calc: Calculation): boolean {
+  return calc.analysedAt === null || calc.analysedAt < calc.inputsChangedAt;
 }
 
 /** The plain record CASL's conditions are checked against. */

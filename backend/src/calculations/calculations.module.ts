@@ -6,11 +6,12 @@ import { MailModule } from '../mail/mail.module';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
 import { CalculationsService } from './calculations.service';
-import { LibraryController } from './library.controller';
+import { CalculationListsService } from './calculation-lists.service';
+import { CalculationListsController, LibraryController } from './calculation-lists.controller';
 
 @Module({
   imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule, AuditModule, MailModule],
-  controllers: [CalculationsController, LibraryController],
-  providers: [CalculationsService],
+  controllers: [CalculationsController, CalculationListsController, LibraryController],
+  providers: [CalculationsService, CalculationListsService],
 })
 export class CalculationsModule {}

@@ -7,7 +7,6 @@ import type {
   AnalysisResponse,
   CalculationDto,
   CalculationInputs,
-  LibraryEntryDto,
   SealCheckResponse,
 } from '@tiermode/shared-types';
 import { AnalysisService } from '../analysis/analysis.service';
@@ -353,32 +352,6 @@ export class CalculationsService {
     const content = sealedContentOf(calc, seal);
     const recomputed = content ? sealHash(content) : '';
     return { valid: recomputed === seal.hash, hash: seal.hash, recomputed, seal };
-  }
-
-  /** Locked and superseded calcs the caller may read, newest lock first. */
-  async library(ability: AppAbility): Promise<LibraryEntryDto[]> {
-    const where = accessibleWhere(ability, 'read', 'Calculation');
-    if (where === null) return [];
-    const calcs = await this.em.find(
-      Calculation,
-      { $and: [{ status: { $in: ['locked', 'superseded'] } }, where] },
-      { populate: POPULATE, orderBy: { lockedAt: 'desc' } },
-    );
-    return calcs
-      .filter((c) => c.seal && ability.can('read', subject('Calculation', calculationSubject(c))))
-      .map((c) => ({
-        id: c.id,
-        title: c.title,
-        revision: c.revision,
-        status: c.status as LibraryEntryDto['status'],
-        projectId: c.project.id,
-        projectName: c.project.name,
-        storeyCount: c.inputs.storeys.length,
-        buildingHeight: c.inputs.storeys.reduce((sum, s) => sum + s.height, 0),
-        reviewerName: c.seal?.reviewerName ?? '',
-        lockedAt: c.seal?.lockedAt ?? '',
-        sealHash: c.seal?.hash ?? '',
-      }));
   }
 
   private async loadSubmitted(

@@ -58,10 +58,11 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
   const make = async (
     projectName: string,
     site: string,
+    basis: Pick<Project, 'codeBasis' | 'structuralSystem'>,
     title: string,
     inputs: CalculationInputs,
   ) => {
-    const project = em.create(Project, { name: projectName, site, createdBy: designer });
+    const project = em.create(Project, { name: projectName, site, ...basis, createdBy: designer });
     project.members.add(designer);
     const result = analyse(inputs);
     const created = at();
@@ -96,6 +97,7 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
   const housing = await make(
     'Alder Court housing block',
     'Invented: a level plot on stiff soil at the edge of an invented town',
+    { codeBasis: 'EN1998-1', structuralSystem: 'Reinforced concrete walls' },
     'Lateral modal analysis, north-south',
     housingBlock(),
   );
@@ -118,6 +120,7 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
   await make(
     'Quarry Lane laboratory',
     'Invented: a sloping former quarry site, on dense gravel',
+    { codeBasis: 'ASCE7-22', structuralSystem: 'Steel moment frames' },
     'Lateral modal analysis, east-west',
     laboratory(),
   );

@@ -8,11 +8,13 @@ import {
   PrimaryKey,
   Property,
 } from '@mikro-orm/core';
+import type { CodeBasis } from '@tiermode/shared-types';
 import { User } from '../users/user.entity';
 
 @Entity({ tableName: 'projects' })
 export class Project {
-  [OptionalProps]?: 'site' | 'createdAt' | 'updatedAt' | 'version';
+  [OptionalProps]?:
+    'site' | 'codeBasis' | 'structuralSystem' | 'createdAt' | 'updatedAt' | 'version';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -23,6 +25,14 @@ export class Project {
   /** A description of the site (invented in the demo). */
   @Property({ type: 'string', length: 1000, nullable: true })
   site: string | null = null;
+
+  /** The code the seismic design follows (CODE_BASES). */
+  @Property({ type: 'string', length: 20, default: 'USER' })
+  codeBasis: CodeBasis = 'USER';
+
+  /** The lateral system in the engineer's words. */
+  @Property({ type: 'string', length: 120, nullable: true })
+  structuralSystem: string | null = null;
 
   @ManyToOne(() => User)
   createdBy!: User;

@@ -12,6 +12,8 @@ export function toProjectDto(project: Project): ProjectDto {
     id: project.id,
     name: project.name,
     site: project.site,
+    codeBasis: project.codeBasis,
+    structuralSystem: project.structuralSystem,
     members,
     memberIds: members.map((m) => m.id),
     createdAt: project.createdAt.toISOString(),

@@ -43,6 +43,8 @@ export class ProjectsService {
     const project = this.em.create(Project, {
       name: body.name,
       site: body.site ?? null,
+      codeBasis: body.codeBasis ?? 'USER',
+      structuralSystem: body.structuralSystem || null,
       createdBy: author,
     });
     project.members.add(author);
@@ -64,6 +66,10 @@ export class ProjectsService {
     if (body.version !== undefined) await this.checkVersion(project, body.version);
     if (body.name !== undefined) project.name = body.name;
     if (body.site !== undefined) project.site = body.site || null;
+    if (body.codeBasis !== undefined) project.codeBasis = body.codeBasis;
+    if (body.structuralSystem !== undefined) {
+      project.structuralSystem = body.structuralSystem || null;
+    }
     if (body.memberIds !== undefined) {
       const ids = [...new Set(body.memberIds)];
       if (!ids.includes(caller.id)) {

@@ -1,9 +1,15 @@
-import type { CreateProjectRequest, UpdateProjectRequest } from '@tiermode/shared-types';
+import {
+  CODE_BASES,
+  type CodeBasis,
+  type CreateProjectRequest,
+  type UpdateProjectRequest,
+} from '@tiermode/shared-types';
 import { Transform } from 'class-transformer';
 import {
   ArrayMaxSize,
   ArrayMinSize,
   IsArray,
+  IsIn,
   IsInt,
   IsNotEmpty,
   IsOptional,
@@ -27,6 +33,16 @@ export class CreateProjectDto implements CreateProjectRequest {
   @IsString({ message: 'site must be a string' })
   @MaxLength(1000, { message: 'site must be at most 1000 characters' })
   site?: string;
+
+  @IsOptional()
+  @IsIn(CODE_BASES, { message: `codeBasis must be one of ${CODE_BASES.join(', ')}` })
+  codeBasis?: CodeBasis;
+
+  @IsOptional()
+  @Transform(trim)
+  @IsString({ message: 'structuralSystem must be a string' })
+  @MaxLength(120, { message: 'structuralSystem must be at most 120 characters' })
+  structuralSystem?: string;
 }
 
 export class UpdateProjectDto implements UpdateProjectRequest {
@@ -48,6 +64,17 @@ export class UpdateProjectDto implements UpdateProjectRequest {
   @IsString({ message: 'site must be a string' })
   @MaxLength(1000, { message: 'site must be at most 1000 characters' })
   site?: string | null;
+
+  @IsOptional()
+  @IsIn(CODE_BASES, { message: `codeBasis must be one of ${CODE_BASES.join(', ')}` })
+  codeBasis?: CodeBasis;
+
+  @IsOptional()
+  @Transform(trim)
+  @ValidateIf((_, value) => value !== null)
+  @IsString({ message: 'structuralSystem must be a string' })
+  @MaxLength(120, { message: 'structuralSystem must be at most 120 characters' })
+  structuralSystem?: string | null;
 
   @IsOptional()
   @IsArray({ message: 'memberIds must be a list of user ids' })

@@ -1,0 +1,40 @@
+import {
+  CALCULATION_STATUSES,
+  type CalculationListQuery,
+  type CalculationStatus,
+} from '@tiermode/shared-types';
+import { Transform, Type } from 'class-transformer';
+import { IsIn, IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
+
+/** `GET /api/calculations` query: every part optional (CalculationListQuery). */
+export class ListCalculationsDto implements Omit<CalculationListQuery, 'status'> {
+  /** Parsed from `status=draft,submitted`. */
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) =>
+    typeof value === 'string' ? value.split(',').map((s) => s.trim()) : value,
+  )
+  @IsIn(CALCULATION_STATUSES, {
+    each: true,
+    message: `status must be a comma-separated list of ${CALCULATION_STATUSES.join(', ')}`,
+  })
+  status?: CalculationStatus[];
+
+  @IsOptional()
+  @IsIn(['me'], { message: 'author must be "me"' })
+  author?: 'me';
+
+  @IsOptional()
+  @IsIn(['me'], { message: 'notAuthor must be "me"' })
+  notAuthor?: 'me';
+
+  @IsOptional()
+  @IsUUID('all', { message: 'projectId must be a project id (UUID)' })
+  projectId?: string;
+
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'limit must be a whole number from 1 to 200' })
+  @Min(1, { message: 'limit must be a whole number from 1 to 200' })
+  @Max(200, { message: 'limit must be a whole number from 1 to 200' })
+  limit?: number;
+}
