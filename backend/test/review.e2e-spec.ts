@@ -8,7 +8,7 @@ import { createTestApp, signIn, tokenFor, type DemoRole } from './support/test-a
 
 describe('Review, lock, seal and revise', () => {
   let app: INestApplication<App>;
-  const tokens = {} as Record<DemoRole | 'lapsed' | 'reviewerAuthor', string>;
+  const tokens = {} as Record<DemoRole | 'lapsed' | 'unlicensed' | 'reviewerAuthor', string>;
   let projectId: string;
   const http = () => request(app.getHttpServer());
   const as = (who: keyof typeof tokens) => ({ Authorization: `Bearer ${tokens[who]}` });
@@ -29,6 +29,13 @@ describe('Review, lock, seal and revise', () => {
       licenseExpiresOn: '2021-06-30',
     }).expect(201);
     tokens.lapsed = await signIn(app, 'lapsed@tiermode.test', 'gusset-plate-2019');
+    await post('admin', '/api/users', {
+      email: 'unlicensed@tiermode.test',
+      name: 'Unlicensed Reviewer',
+      role: 'reviewer',
+      password: 'anchor-bolt-2026',
+    }).expect(201);
+    tokens.unlicensed = await signIn(app, 'unlicensed@tiermode.test', 'anchor-bolt-2026');
     projectId = (await post('designer', '/api/projects', { name: 'Review project' }).expect(201))
       .body.id;
   });
@@ -120,6 +127,7 @@ describe('Review, lock, seal and revise', () => {
   it('lets only a licensed reviewer who is not the author lock', async () => {
     const calc = await submittedCalc();
     await post('lapsed', `/api/calculations/${calc.id}/lock`, { statement: 'ok' }).expect(403);
+    await post('unlicensed', `/api/calculations/${calc.id}/lock`, { statement: 'ok' }).expect(403);
     await post('designer', `/api/calculations/${calc.id}/lock`, { statement: 'ok' }).expect(403);
     await post('admin', `/api/calculations/${calc.id}/lock`, { statement: 'ok' }).expect(403);
     await post('student', `/api/calculations/${calc.id}/lock`, { statement: 'ok' }).expect(403);
