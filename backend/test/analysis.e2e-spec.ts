@@ -128,6 +128,16 @@ describe('POST /api/analysis', () => {
       withStorey(0, { colour: 'red' }),
       'property storeys[0].colour (storey 1) should not exist',
     ],
+    [
+      'a label that is not text',
+      withStorey(1, { label: 7 }),
+      'storeys[1].label (storey 2) must be text',
+    ],
+    [
+      'a label of 61 characters',
+      withStorey(2, { label: 'L'.repeat(61) }),
+      'storeys[2].label (storey 3) must be at most 60 characters',
+    ],
     ['no storeys', { ...valid(), storeys: [] }, 'storeys must have at least one storey'],
     [
       '501 storeys',

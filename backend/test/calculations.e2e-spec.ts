@@ -42,6 +42,23 @@ describe('Saved calculations (drafts)', () => {
     expect(res.body.author.name).toBe('Mira Castell');
   });
 
+  it('keeps the storey labels with the inputs', async () => {
+    const labelled = inputs();
+    labelled.storeys[0].label = 'Ground';
+    labelled.storeys[2].label = 'Roof';
+    const res = await http()
+      .post(`/api/projects/${projectId}/calculations`)
+      .set(as('designer'))
+      .send({ title: 'Labelled', inputs: labelled })
+      .expect(201);
+    const stored = await http().get(`/api/calculations/${res.body.id}`).set(as('designer'));
+    expect(stored.body.inputs.storeys.map((s: { label?: string }) => s.label)).toEqual([
+      'Ground',
+      undefined,
+      'Roof',
+    ]);
+  });
+
   it('analyses the stored inputs, keeps the result with the engine version, and flags it stale after an edit', async () => {
     const calc = (await createCalc().expect(201)).body;
     const analysed = await http()

@@ -3,6 +3,8 @@
  * spectral accelerations in g. Arrays are per storey; index 0 = storey 1 / level 1 (at the base).
  */
 export interface StoreyInput {
+  /** The engineer's name for the level, e.g. "Level 3" or "Roof"; kept with a saved calc. */
+  label?: string;
   /** kg */
   mass: number;
   /** N/m */

@@ -18,7 +18,9 @@ import {
   IsObject,
   IsOptional,
   IsPositive,
+  IsString,
   Max,
+  MaxLength,
   Min,
   ValidateNested,
 } from 'class-validator';
@@ -28,6 +30,11 @@ const isNumber = (field: string, unit: string) =>
   IsNumber(FINITE, { message: `${field} must be a number (${unit})` });
 
 export class StoreyDto implements StoreyInput {
+  @IsOptional()
+  @IsString({ message: 'label must be text' })
+  @MaxLength(60, { message: 'label must be at most 60 characters' })
+  label?: string;
+
   @isNumber('mass', 'kg')
   @IsPositive({ message: 'mass must be a positive number (kg)' })
   mass!: number;

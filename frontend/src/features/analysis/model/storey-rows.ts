@@ -49,8 +49,25 @@ export function storeyProblems(rows: readonly StoreyRow[]): CellProblem[] {
   return problems;
 }
 
+/** The rows as the API takes them; a blank label is left out. */
 export function toStoreyInputs(rows: readonly StoreyRow[]): StoreyInput[] {
-  return rows.map(({ mass, stiffness, height }) => ({ mass, stiffness, height }));
+  return rows.map(({ label, mass, stiffness, height }) => ({
+    ...(label.trim() ? { label: label.trim() } : {}),
+    mass,
+    stiffness,
+    height,
+  }));
+}
+
+/** Rows for the storey table from stored storeys, each with a fresh row id. */
+export function fromStoreyInputs(storeys: readonly StoreyInput[]): StoreyRow[] {
+  return storeys.map((s) => ({
+    id: newRowId(),
+    label: s.label ?? '',
+    height: s.height,
+    mass: s.mass,
+    stiffness: s.stiffness,
+  }));
 }
 
 /** Elevation of each level (m): H_i = h_1 + ... + h_i. */
