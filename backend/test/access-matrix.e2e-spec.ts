@@ -151,6 +151,12 @@ const MATRIX: Cell[] = [
     call: (c) => http().post('/api/projects').set(as(c)).send({ name: 'Another project' }),
   },
   {
+    route: 'GET /api/projects/designers',
+    allowed: ['designer', 'outsider'],
+    ok: 200,
+    call: (c) => http().get('/api/projects/designers').set(as(c)),
+  },
+  {
     route: 'GET /api/projects/:id',
     allowed: staff,
     ok: 200,

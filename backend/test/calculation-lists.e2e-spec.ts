@@ -47,6 +47,13 @@ describe('project code basis and structural system', () => {
   });
 });
 
+describe('GET /api/projects/designers', () => {
+  it('lists the active designers by name, for adding members', async () => {
+    const res = await http().get('/api/projects/designers').set(as('designer')).expect(200);
+    expect(res.body).toEqual([{ id: expect.any(String), name: 'Mira Castell' }]);
+  });
+});
+
 describe('GET /api/calculations', () => {
   let projectId: string;
   let draftId: string;

@@ -51,7 +51,7 @@ describe('The analysis page (designer)', () => {
     await signIn(page, 'designer');
     await page
       .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: 'Analysis' })
+      .getByRole('link', { name: 'Quick analysis' })
       .click();
     await page.getByRole('table', { name: 'Modes' }).waitFor();
     await waitForResults(page);

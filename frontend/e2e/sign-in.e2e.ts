@@ -3,10 +3,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn, type DemoRole } from './support/browser';
 
 const NAVIGATION: Record<DemoRole, string[]> = {
-  admin: ['Start', 'Analysis', 'Verification', 'People'],
-  designer: ['Start', 'Analysis', 'Verification'],
-  reviewer: ['Start', 'Analysis', 'Verification'],
-  student: ['Start', 'Analysis', 'Verification'],
+  admin: ['Start', 'Projects', 'Library', 'Quick analysis', 'Verification', 'People', 'Outbox'],
+  designer: ['Start', 'Projects', 'Library', 'Quick analysis', 'Verification'],
+  reviewer: ['Start', 'Projects', 'Library', 'Quick analysis', 'Verification'],
+  student: ['Start', 'Library', 'Quick analysis', 'Verification'],
 };
 const NAMES: Record<DemoRole, string> = {
   admin: 'Rowan Pike',

@@ -11,6 +11,9 @@ export type CalculationInputs = AnalysisRequest;
 export interface CalculationDto {
   id: string;
   projectId: string;
+  projectName: string;
+  /** The designers of the project (who may edit its drafts), for the client's ability checks. */
+  projectMemberIds: string[];
   title: string;
   revision: number;
   status: CalculationStatus;

@@ -11,6 +11,8 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
   return {
     id: calc.id,
     projectId: calc.project.id,
+    projectName: calc.project.name,
+    projectMemberIds: projectSubject(calc.project).memberIds,
     title: calc.title,
     revision: calc.revision,
     status: calc.status,

@@ -1,5 +1,5 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
-import type { ProjectDto } from '@tiermode/shared-types';
+import type { ProjectDto, ProjectMemberDto } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';
@@ -26,6 +26,13 @@ export class ProjectsController {
     @Body() body: CreateProjectDto,
   ): Promise<ProjectDto> {
     return this.projects.create(ability, user, body);
+  }
+
+  /** The active designers, who may be made members (before `:id`, which it would match). */
+  @Get('designers')
+  @CheckPolicies((ability) => ability.can('create', 'Project'))
+  designers(): Promise<ProjectMemberDto[]> {
+    return this.projects.designers();
   }
 
   @Get(':id')

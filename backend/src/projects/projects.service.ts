@@ -6,7 +6,7 @@ import {
   Injectable,
   NotFoundException,
 } from '@nestjs/common';
-import type { ProjectDto } from '@tiermode/shared-types';
+import type { ProjectDto, ProjectMemberDto } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { User } from '../users/user.entity';
 import type { CreateProjectDto, UpdateProjectDto } from './dto/project.dto';
@@ -36,6 +36,16 @@ export class ProjectsService {
       subject('Project', projectSubject(project)),
     );
     return toProjectDto(project);
+  }
+
+  /** Active designers by name, the people a project's members may add. */
+  async designers(): Promise<ProjectMemberDto[]> {
+    const users = await this.em.find(
+      User,
+      { role: 'designer', active: true },
+      { orderBy: { name: 'asc' } },
+    );
+    return users.map((u) => ({ id: u.id, name: u.name }));
   }
 
   async create(ability: AppAbility, author: User, body: CreateProjectDto): Promise<ProjectDto> {

@@ -1,4 +1,7 @@
+import FolderIcon from '@mui/icons-material/Folder';
 import GroupIcon from '@mui/icons-material/Group';
+import LocalLibraryIcon from '@mui/icons-material/LocalLibrary';
+import MailIcon from '@mui/icons-material/Mail';
 import HomeIcon from '@mui/icons-material/Home';
 import StackedLineChartIcon from '@mui/icons-material/StackedLineChart';
 import VerifiedIcon from '@mui/icons-material/Verified';
@@ -14,8 +17,10 @@ interface GuardedEntry extends NavEntry {
 /** Every page of the app; each feature that adds a page adds its entry here. */
 const ENTRIES: GuardedEntry[] = [
   { label: 'Start', to: '/', icon: <HomeIcon /> },
+  { label: 'Projects', to: '/projects', icon: <FolderIcon />, requires: ['read', 'Project'] },
+  { label: 'Library', to: '/library', icon: <LocalLibraryIcon />, requires: ['read', 'Library'] },
   {
-    label: 'Analysis',
+    label: 'Quick analysis',
     to: '/analysis',
     icon: <StackedLineChartIcon />,
     requires: ['create', 'Analysis'],
@@ -27,6 +32,7 @@ const ENTRIES: GuardedEntry[] = [
     requires: ['read', 'Verification'],
   },
   { label: 'People', to: '/users', icon: <GroupIcon />, requires: ['manage', 'User'] },
+  { label: 'Outbox', to: '/outbox', icon: <MailIcon />, requires: ['read', 'Outbox'] },
 ];
 
 export function navigationFor(ability: AppAbility): NavEntry[] {

@@ -1,7 +1,9 @@
 import { Card, CardContent, Chip, Stack, Typography } from '@mui/material';
+import type { ReactNode } from 'react';
 import { ROLE_LABELS, type Role, type UserDto } from '@tiermode/shared-types';
 import { CautionBanner } from '@/components/feedback/caution-banner';
 import { useMe } from '@/features/auth/api/get-me';
+import { CalculationList } from '@/features/calculations/components/calculation-list';
 import { useAppAbility } from '@/lib/ability';
 
 /** What each role does in the firm's calculation workflow (product.md). */
@@ -39,13 +41,22 @@ function LicenceCard({ user, canLock }: { user: UserDto; canLock: boolean }) {
   );
 }
 
+function DashboardList({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <Stack spacing={1} component="section" aria-label={title}>
+      <Typography variant="h2">{title}</Typography>
+      {children}
+    </Stack>
+  );
+}
+
 export function HomeRoute() {
   const me = useMe(true);
   const ability = useAppAbility();
   if (!me.data) return null;
   const { user } = me.data;
   return (
-    <Stack spacing={2} sx={{ maxWidth: 880 }}>
+    <Stack spacing={2} sx={{ maxWidth: 1200 }}>
       <Typography variant="h1">Welcome, {user.name}</Typography>
       <CautionBanner />
       <Card variant="outlined">
@@ -59,6 +70,37 @@ export function HomeRoute() {
       {user.role === 'reviewer' && (
         <LicenceCard user={user} canLock={ability.can('lock', 'Calculation')} />
       )}
+      {user.role === 'designer' && (
+        <DashboardList title="My drafts">
+          <CalculationList
+            query={{ status: 'draft', author: 'me' }}
+            label="My drafts"
+            empty="No drafts: create a calc in a project"
+          />
+        </DashboardList>
+      )}
+      {(user.role === 'designer' || user.role === 'reviewer') && (
+        <DashboardList
+          title={user.role === 'reviewer' ? 'Waiting for my review' : 'Mine, waiting for review'}
+        >
+          <CalculationList
+            query={
+              user.role === 'reviewer'
+                ? { status: 'submitted', notAuthor: 'me' }
+                : { status: 'submitted', author: 'me' }
+            }
+            label={user.role === 'reviewer' ? 'Waiting for my review' : 'Mine, waiting for review'}
+            empty="Nothing is waiting for review"
+          />
+        </DashboardList>
+      )}
+      <DashboardList title="Recently locked">
+        <CalculationList
+          query={{ status: 'locked', limit: 10 }}
+          label="Recently locked"
+          empty="No calc has been locked yet"
+        />
+      </DashboardList>
     </Stack>
   );
 }

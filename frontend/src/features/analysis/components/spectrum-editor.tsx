@@ -9,36 +9,52 @@ interface SpectrumEditorProps {
   spectrum: SpectrumInput;
   modes: { number: number; period: number; sa: number }[];
   onChange: (spectrum: SpectrumInput) => void;
+  /** Shown, not edited. */
+  readOnly?: boolean;
 }
 
 type PointRow = { id: number; period: number; sa: number };
 
 /** The design spectrum: its point table, a generator that fills it, and its plot. */
-export function SpectrumEditor({ spectrum, modes, onChange }: SpectrumEditorProps) {
+export function SpectrumEditor({
+  spectrum,
+  modes,
+  onChange,
+  readOnly = false,
+}: SpectrumEditorProps) {
   const rows: PointRow[] = spectrum.points.map((p, id) => ({ id, ...p }));
   const setPoints = (points: SpectrumInput['points']) => onChange({ ...spectrum, points });
-  const columns: GridColDef<PointRow>[] = [
-    { field: 'period', headerName: 'Period T (s)', type: 'number', editable: true, flex: 1 },
-    { field: 'sa', headerName: 'Sa (g)', type: 'number', editable: true, flex: 1 },
+  const pointColumns: GridColDef<PointRow>[] = [
     {
-      field: 'actions',
-      type: 'actions',
-      width: 60,
-      getActions: ({ row }) => [
-        <GridActionsCellItem
-          key="delete"
-          icon={<DeleteIcon />}
-          label={`Delete point ${row.id + 1}`}
-          onClick={() => setPoints(spectrum.points.filter((_, i) => i !== row.id))}
-        />,
-      ],
+      field: 'period',
+      headerName: 'Period T (s)',
+      type: 'number',
+      editable: !readOnly,
+      flex: 1,
     },
+    { field: 'sa', headerName: 'Sa (g)', type: 'number', editable: !readOnly, flex: 1 },
   ];
+  const deleteColumn: GridColDef<PointRow> = {
+    field: 'actions',
+    type: 'actions',
+    width: 60,
+    getActions: ({ row }) => [
+      <GridActionsCellItem
+        key="delete"
+        icon={<DeleteIcon />}
+        label={`Delete point ${row.id + 1}`}
+        onClick={() => setPoints(spectrum.points.filter((_, i) => i !== row.id))}
+      />,
+    ],
+  };
+  const columns = readOnly ? pointColumns : [...pointColumns, deleteColumn];
   return (
     <Stack spacing={2}>
-      <SpectrumGeneratorForm
-        onGenerated={(g) => onChange({ points: g.points, interpolation: g.interpolation })}
-      />
+      {!readOnly && (
+        <SpectrumGeneratorForm
+          onGenerated={(g) => onChange({ points: g.points, interpolation: g.interpolation })}
+        />
+      )}
       <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2}>
         <Stack spacing={1} sx={{ width: { lg: 320 } }}>
           <TextField
@@ -46,6 +62,7 @@ export function SpectrumEditor({ spectrum, modes, onChange }: SpectrumEditorProp
             size="small"
             label="Interpolation"
             value={spectrum.interpolation ?? 'linear'}
+            disabled={readOnly}
             onChange={(e) =>
               onChange({ ...spectrum, interpolation: e.target.value as SpectrumInterpolation })
             }
@@ -72,6 +89,7 @@ export function SpectrumEditor({ spectrum, modes, onChange }: SpectrumEditorProp
             />
           </Box>
           <Button
+            sx={{ display: readOnly ? 'none' : undefined }}
             onClick={() => {
               const last = spectrum.points[spectrum.points.length - 1];
               setPoints([

@@ -22,6 +22,8 @@ interface StoreyTableProps {
   rows: StoreyRow[];
   units: UnitSystem;
   onChange: (rows: StoreyRow[]) => void;
+  /** Shown, not edited: a locked or submitted calc, or one the reader may not change. */
+  readOnly?: boolean;
 }
 
 type DisplayRow = StoreyRow & { number: number };
@@ -30,7 +32,7 @@ const toNumber = (value: unknown) =>
   typeof value === 'number' ? value : value === null || value === '' ? Number.NaN : Number(value);
 
 /** The storey table: storey 1 (at the base) first; values shown in the chosen units. */
-export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
+export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyTableProps) {
   const [pasting, setPasting] = useState(false);
   const [columnsFor, setColumnsFor] = useState<number | null>(null);
   const problems = storeyProblems(rows);
@@ -44,7 +46,7 @@ export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
     field,
     headerName: header,
     type: 'number',
-    editable: true,
+    editable: !readOnly,
     flex: 1,
     minWidth: 130,
     valueGetter: (_value, row) =>
@@ -67,12 +69,12 @@ export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
     onChange([...rows.slice(0, index), copy, ...rows.slice(index)]);
   };
 
-  const columns: GridColDef<DisplayRow>[] = [
+  const dataColumns: GridColDef<DisplayRow>[] = [
     { field: 'number', headerName: 'Storey', width: 80, type: 'number', sortable: false },
     {
       field: 'label',
       headerName: 'Label',
-      editable: true,
+      editable: !readOnly,
       flex: 1,
       minWidth: 110,
       sortable: false,
@@ -80,46 +82,49 @@ export function StoreyTable({ rows, units, onChange }: StoreyTableProps) {
     numeric('height', 'length', `Height (${unitLabel(units, 'length')})`),
     numeric('mass', 'mass', massHeader(units)),
     numeric('stiffness', 'stiffness', `Stiffness (${unitLabel(units, 'stiffness')})`),
-    {
-      field: 'actions',
-      type: 'actions',
-      headerName: 'Storey actions',
-      width: 140,
-      getActions: ({ row }) => [
-        <GridActionsCellItem
-          key="columns"
-          icon={<CalculateIcon />}
-          label={`Stiffness of storey ${row.number} from its columns`}
-          disabled={!(row.height > 0)}
-          onClick={() => setColumnsFor(row.number - 1)}
-        />,
-        <GridActionsCellItem
-          key="insert"
-          icon={<VerticalAlignBottomIcon />}
-          label={`Insert a storey below storey ${row.number}`}
-          onClick={() => insertBelow(row.number - 1)}
-        />,
-        <GridActionsCellItem
-          key="delete"
-          icon={<DeleteIcon />}
-          label={`Delete storey ${row.number}`}
-          disabled={rows.length === 1}
-          onClick={() => onChange(rows.filter((r) => r.id !== row.id))}
-        />,
-      ],
-    },
   ];
+  const actionColumn: GridColDef<DisplayRow> = {
+    field: 'actions',
+    type: 'actions',
+    headerName: 'Storey actions',
+    width: 140,
+    getActions: ({ row }) => [
+      <GridActionsCellItem
+        key="columns"
+        icon={<CalculateIcon />}
+        label={`Stiffness of storey ${row.number} from its columns`}
+        disabled={!(row.height > 0)}
+        onClick={() => setColumnsFor(row.number - 1)}
+      />,
+      <GridActionsCellItem
+        key="insert"
+        icon={<VerticalAlignBottomIcon />}
+        label={`Insert a storey below storey ${row.number}`}
+        onClick={() => insertBelow(row.number - 1)}
+      />,
+      <GridActionsCellItem
+        key="delete"
+        icon={<DeleteIcon />}
+        label={`Delete storey ${row.number}`}
+        disabled={rows.length === 1}
+        onClick={() => onChange(rows.filter((r) => r.id !== row.id))}
+      />,
+    ],
+  };
+  const columns = readOnly ? dataColumns : [...dataColumns, actionColumn];
 
   return (
     <Stack spacing={1}>
-      <Stack direction="row" spacing={1}>
-        <Button startIcon={<AddIcon />} onClick={() => insertBelow(rows.length)}>
-          Add a storey on top
-        </Button>
-        <Button startIcon={<ContentPasteIcon />} onClick={() => setPasting(true)}>
-          Paste from a spreadsheet
-        </Button>
-      </Stack>
+      {!readOnly && (
+        <Stack direction="row" spacing={1}>
+          <Button startIcon={<AddIcon />} onClick={() => insertBelow(rows.length)}>
+            Add a storey on top
+          </Button>
+          <Button startIcon={<ContentPasteIcon />} onClick={() => setPasting(true)}>
+            Paste from a spreadsheet
+          </Button>
+        </Stack>
+      )}
       <Box
         sx={{
           height: Math.min(460, 110 + rows.length * 52),

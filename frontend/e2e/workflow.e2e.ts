@@ -1,0 +1,217 @@
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, newPage, screenshot, signIn, type DemoRole } from './support/browser';
+
+// An invented project for this journey; every name and number is made up.
+const PROJECT = 'Birch Row offices';
+const CALC = 'Birch Row lateral analysis';
+const SCRATCH = 'Scratch draft';
+
+async function as<T>(browser: Browser, role: DemoRole, job: (page: Page) => Promise<T>) {
+  const { page, close } = await newPage(browser);
+  await signIn(page, role);
+  await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+  const result = await job(page);
+  await close();
+  return result;
+}
+
+const nav = (page: Page, name: string) =>
+  page.getByRole('navigation').getByRole('link', { name }).click();
+
+async function openTab(page: Page, name: string) {
+  await page.getByRole('tab', { name }).click();
+}
+
+async function openFromDashboard(page: Page, list: string) {
+  await page.getByRole('grid', { name: list }).getByRole('link', { name: CALC }).click();
+  await page.getByRole('heading', { name: CALC }).waitFor();
+}
+
+async function editMass(page: Page, storey: number, tonnes: string) {
+  const row = page
+    .getByRole('grid', { name: 'Storey table' })
+    .getByRole('row')
+    .filter({ has: page.getByRole('gridcell', { name: String(storey), exact: true }) });
+  const cell = row.locator('[data-field="mass"]');
+  await cell.dblclick();
+  await cell.locator('input').fill(tonnes);
+  await cell.locator('input').press('Enter');
+}
+
+async function saveAndAnalyse(page: Page) {
+  await page.getByRole('button', { name: 'Save and analyse' }).click();
+  await page.getByRole('table', { name: 'Modes' }).waitFor();
+  await expect.poll(() => page.getByRole('status').first().textContent()).toBe('All changes saved');
+}
+
+describe('The review workflow, across the four roles', () => {
+  let browser: Browser;
+  let calcUrl = '';
+  let scratchUrl = '';
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(() => browser?.close());
+
+  it('designer: creates a project and a calc, enters storeys, analyses and submits', async () => {
+    await as(browser, 'designer', async (page) => {
+      await nav(page, 'Projects');
+      await page.getByRole('button', { name: 'New project' }).click();
+      const dialog = page.getByRole('dialog', { name: 'New project' });
+      await dialog.getByRole('button', { name: 'Create the project' }).click();
+      await dialog.getByText('Give the project a name').waitFor();
+      await dialog.getByLabel('Name').fill(PROJECT);
+      await dialog.getByLabel('Site').fill('Invented: a corner plot on medium-dense sand');
+      await dialog.getByLabel('Structural system').fill('Steel braced frames');
+      await screenshot(page, 'workflow-01-new-project');
+      await dialog.getByRole('button', { name: 'Create the project' }).click();
+      await page.getByRole('heading', { name: PROJECT, level: 1 }).waitFor();
+
+      await page.getByRole('button', { name: 'New calculation' }).click();
+      await page.getByLabel('Title').fill(SCRATCH);
+      await page.getByRole('button', { name: 'Create the draft' }).click();
+      await page.getByRole('heading', { name: SCRATCH }).waitFor();
+      scratchUrl = new URL(page.url()).pathname;
+
+      await page.goBack();
+      await page.getByRole('button', { name: 'New calculation' }).click();
+      await page.getByLabel('Title').fill(CALC);
+      await page.getByRole('button', { name: 'Create the draft' }).click();
+      await page.getByRole('heading', { name: CALC }).waitFor();
+      calcUrl = new URL(page.url()).pathname;
+      await page.getByRole('note', { name: 'Preliminary' }).waitFor();
+
+      await editMass(page, 2, '455');
+      await expect
+        .poll(() => page.getByRole('status').first().textContent())
+        .toBe('Unsaved changes');
+      await screenshot(page, 'workflow-02-storeys-edited');
+      await saveAndAnalyse(page);
+      await screenshot(page, 'workflow-03-results');
+
+      await openTab(page, 'Review');
+      await page.getByRole('button', { name: 'Submit for review' }).click();
+      await page.getByText('Submitted for review', { exact: true }).first().waitFor();
+      await screenshot(page, 'workflow-04-submitted');
+    });
+  });
+
+  it('reviewer: comments on a storey and returns the calc', async () => {
+    await as(browser, 'reviewer', async (page) => {
+      await openFromDashboard(page, 'Waiting for my review');
+      await openTab(page, 'Review');
+      await page.getByLabel('About').click();
+      await page.getByRole('option', { name: 'Storey 2' }).click();
+      await page
+        .getByLabel('Comment', { exact: true })
+        .fill('The mass of storey 2 looks high for an office floor: check the plant load.');
+      await page.getByRole('button', { name: 'Add the comment' }).click();
+      await page
+        .getByRole('list', { name: 'Review comments' })
+        .getByText('check the plant load')
+        .waitFor();
+
+      await page.getByRole('button', { name: 'Return to the designer' }).click();
+      const dialog = page.getByRole('dialog', { name: 'Return to the designer' });
+      await dialog.getByRole('button', { name: 'Return the calc' }).click();
+      await dialog.getByText('Say what the designer should change').waitFor();
+      await dialog.getByLabel('What should change').fill('Please revisit storey 2, see comment.');
+      await screenshot(page, 'workflow-05-return-dialog');
+      await dialog.getByRole('button', { name: 'Return the calc' }).click();
+      await dialog.waitFor({ state: 'detached' });
+      await page.getByText('Draft', { exact: true }).first().waitFor();
+    });
+  });
+
+  it('designer: resolves the comment, fixes the storey and resubmits', async () => {
+    await as(browser, 'designer', async (page) => {
+      await openFromDashboard(page, 'My drafts');
+      await openTab(page, 'Review');
+      const thread = page.getByRole('list', { name: 'Review comments' });
+      await thread.getByText('check the plant load').waitFor();
+      // The box follows the saved state, so it turns once the server has the change.
+      await thread.getByRole('checkbox', { name: 'Resolved' }).first().click();
+      await expect
+        .poll(() => thread.getByRole('checkbox', { name: 'Resolved' }).first().isChecked())
+        .toBe(true);
+
+      await openTab(page, 'Storey table');
+      await editMass(page, 2, '400');
+      // Submitting needs the edits saved and analysed first; the page says so.
+      await openTab(page, 'Review');
+      await page.getByText('Save your changes first.').waitFor();
+      await saveAndAnalyse(page);
+      await openTab(page, 'Review');
+      await page.getByRole('button', { name: 'Submit for review' }).click();
+      await page.getByText('Submitted for review: waiting for a reviewer.').waitFor();
+      await screenshot(page, 'workflow-06-resubmitted');
+    });
+  });
+
+  it('reviewer: locks it with a statement, and the seal is valid', async () => {
+    await as(browser, 'reviewer', async (page) => {
+      await openFromDashboard(page, 'Waiting for my review');
+      await openTab(page, 'Review');
+      await page.getByRole('button', { name: 'Lock as the calc of record' }).click();
+      const dialog = page.getByRole('dialog', { name: 'Lock as the calc of record' });
+      await expect
+        .poll(() => dialog.getByRole('alert', { name: 'Your licence' }).textContent())
+        .toContain('Tomas Hale');
+      await dialog
+        .getByLabel('Statement of acceptance')
+        .fill('Accepted as the lateral analysis of record for the permit set.');
+      await screenshot(page, 'workflow-07-lock-dialog');
+      await dialog.getByRole('button', { name: 'Lock and seal' }).click();
+      await dialog.waitFor({ state: 'detached' });
+      await page.getByText('The seal is valid').waitFor();
+      expect(await page.getByTestId('preliminary-watermark').count()).toBe(0);
+      await screenshot(page, 'workflow-08-locked');
+    });
+  });
+
+  it('student: finds it in the library, reads it, and cannot reach a draft', async () => {
+    await as(browser, 'student', async (page) => {
+      await nav(page, 'Library');
+      await page.getByRole('combobox', { name: 'Code basis' }).click();
+      await page.getByRole('option', { name: 'ASCE 7-22' }).click();
+      const library = page.getByRole('grid', { name: 'Library' });
+      await library.getByRole('link', { name: CALC }).waitFor();
+      expect(await library.getByRole('link', { name: /Alder Court/ }).count()).toBe(0);
+      await screenshot(page, 'workflow-09-library');
+      await library.getByRole('link', { name: CALC }).click();
+      await page.getByText('The seal is valid').waitFor();
+      await openTab(page, 'Results');
+      await page.getByRole('region', { name: 'Method, step by step' }).waitFor();
+      expect(await page.getByRole('button', { name: 'Save' }).count()).toBe(0);
+      await screenshot(page, 'workflow-10-student-reads');
+
+      await page.goto(scratchUrl);
+      await page.getByRole('heading', { name: 'Not available to your role' }).waitFor();
+      expect(await page.getByText(SCRATCH).count()).toBe(0);
+      await screenshot(page, 'workflow-11-student-refused-draft');
+    });
+    expect(calcUrl).toMatch(/^\/calculations\//);
+  });
+
+  it('admin: sees the mail of each step in the outbox', async () => {
+    await as(browser, 'admin', async (page) => {
+      await nav(page, 'Outbox');
+      const outbox = page.getByRole('grid', { name: 'Outbox' });
+      for (const subject of [
+        `Submitted for review: ${CALC} (revision 1)`,
+        `Returned with comments: ${CALC} (revision 1)`,
+        `Locked as the calc of record: ${CALC} (revision 1)`,
+      ]) {
+        await outbox.getByText(subject).first().waitFor();
+      }
+      await outbox.getByText(`Returned with comments: ${CALC} (revision 1)`).first().click();
+      await page
+        .getByRole('region', { name: 'Message' })
+        .getByText('Please revisit storey 2')
+        .waitFor();
+      await screenshot(page, 'workflow-12-outbox');
+    });
+  });
+});

@@ -1,0 +1,247 @@
+import { Alert, Button, LinearProgress, Link, Stack, Tab, Tabs, Typography } from '@mui/material';
+import type { CalculationDto, UserDto } from '@tiermode/shared-types';
+import { AxiosError } from 'axios';
+import { useState } from 'react';
+import { Link as RouterLink, useNavigate, useParams } from 'react-router';
+import { RequestFailed } from '@/components/errors/request-failed';
+import { CautionBanner } from '@/components/feedback/caution-banner';
+import { StatusChip } from '@/components/feedback/status-chip';
+import { AnalysisSettings } from '@/features/analysis/components/analysis-settings';
+import { AnalysisResults, Section } from '@/features/analysis/components/results/analysis-results';
+import { SpectrumEditor } from '@/features/analysis/components/spectrum-editor';
+import { StoreyTable } from '@/features/analysis/components/storey-table';
+import { UnitsToggle } from '@/features/analysis/components/units-toggle';
+import { useAnalysisInputs } from '@/features/analysis/model/use-analysis-inputs';
+import { useMe } from '@/features/auth/api/get-me';
+import {
+  useCalculation,
+  useSaveAndAnalyse,
+  useSaveCalculation,
+} from '@/features/calculations/api/calculations';
+import { CommentThread } from '@/features/calculations/components/comment-thread';
+import { HistoryPanel } from '@/features/calculations/components/history-panel';
+import { PreliminaryWatermark } from '@/features/calculations/components/preliminary-watermark';
+import { ReviewActions } from '@/features/calculations/components/review-actions';
+import { SealPanel } from '@/features/calculations/components/seal-panel';
+import { canOn, useAppAbility } from '@/lib/ability';
+import { errorMessages } from '@/lib/api-client';
+import '@/lib/charts';
+import { sameJson } from '@/lib/same-json';
+import type { UnitSystem } from '@/lib/units';
+
+const TABS = ['Storey table', 'Design spectrum', 'Results', 'Review', 'History'] as const;
+type TabName = (typeof TABS)[number];
+
+/** A saved calculation: its inputs, stored results, review and history, in tabs. */
+export function CalculationRoute() {
+  const { id = '' } = useParams();
+  const calc = useCalculation(id);
+  const me = useMe(true);
+  if (calc.isError) return <RequestFailed error={calc.error} />;
+  if (!calc.data || !me.data) return <LinearProgress aria-label="Loading the calculation" />;
+  return <CalculationWorkspace key={calc.data.id} calc={calc.data} user={me.data.user} />;
+}
+
+function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: UserDto }) {
+  const ability = useAppAbility();
+  const navigate = useNavigate();
+  const inputs = useAnalysisInputs(calc.inputs);
+  const [units, setUnits] = useState<UnitSystem>('SI');
+  const [tab, setTab] = useState<TabName>('Storey table');
+  const save = useSaveCalculation(calc.id);
+  const analyse = useSaveAndAnalyse(calc.id);
+
+  const record = {
+    id: calc.id,
+    status: calc.status,
+    authorId: calc.author.id,
+    projectMemberIds: calc.projectMemberIds,
+  };
+  const editable = calc.status === 'draft' && canOn(ability, 'update', 'Calculation', record);
+  const ofRecord = calc.status === 'locked' || calc.status === 'superseded';
+  const dirty = editable && !sameJson(inputs.request, calc.inputs);
+  const saveError = save.error ?? analyse.error;
+  const conflict = saveError instanceof AxiosError && saveError.response?.status === 409;
+  const busy = save.isPending || analyse.isPending;
+
+  const doSave = () =>
+    inputs.request && save.mutate({ version: calc.version, inputs: inputs.request });
+  const doAnalyse = () =>
+    analyse.mutate(
+      { version: calc.version, ...(dirty && inputs.request ? { inputs: inputs.request } : {}) },
+      { onSuccess: () => setTab('Results') },
+    );
+
+  const result = calc.analysis;
+  const resultsMatchStoreys =
+    result !== null && result.modes[0]?.shape.length === calc.inputs.storeys.length;
+
+  return (
+    <Stack spacing={2}>
+      <Stack
+        direction="row"
+        sx={{ alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap', gap: 1 }}
+      >
+        <Stack spacing={0.5}>
+          <Typography variant="h1">{calc.title}</Typography>
+          <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+            <StatusChip status={calc.status} size="medium" />
+            <Typography color="text.secondary">
+              Revision {calc.revision} ·{' '}
+              {ability.can('read', 'Project') ? (
+                <Link component={RouterLink} to={`/projects/${calc.projectId}`}>
+                  {calc.projectName}
+                </Link>
+              ) : (
+                calc.projectName
+              )}{' '}
+              · by {calc.author.name}
+              {calc.reviewer ? ` · reviewed by ${calc.reviewer.name}` : ''}
+            </Typography>
+          </Stack>
+        </Stack>
+        <UnitsToggle units={units} onChange={setUnits} />
+      </Stack>
+      <CautionBanner />
+      {!ofRecord && (
+        <Alert severity="info" role="note" aria-label="Preliminary">
+          Preliminary: {calc.status === 'draft' ? 'a draft' : 'under review'}, not a calc of record.
+          Nothing here is for construction until a licensed reviewer locks it.
+        </Alert>
+      )}
+      {calc.status === 'superseded' && (
+        <Alert severity="warning">
+          Superseded: a newer revision of this calc has been locked. See History.
+        </Alert>
+      )}
+      {calc.seal && <SealPanel calc={calc} />}
+
+      {editable && (
+        <Stack
+          direction="row"
+          spacing={1}
+          sx={{ alignItems: 'center', flexWrap: 'wrap' }}
+          aria-label="Saving"
+        >
+          <Button variant="outlined" disabled={!dirty || !inputs.request || busy} onClick={doSave}>
+            Save
+          </Button>
+          <Button variant="contained" disabled={!inputs.request || busy} onClick={doAnalyse}>
+            {dirty ? 'Save and analyse' : 'Analyse'}
+          </Button>
+          <Typography role="status" color={dirty ? 'warning.main' : 'text.secondary'}>
+            {busy
+              ? 'Saving…'
+              : dirty
+                ? inputs.request
+                  ? 'Unsaved changes'
+                  : 'Unsaved changes; fix the marked inputs to save them'
+                : 'All changes saved'}
+          </Typography>
+        </Stack>
+      )}
+      {busy && <LinearProgress aria-label="Working" />}
+      {saveError && (
+        <Alert
+          severity="error"
+          role="alert"
+          action={
+            conflict ? (
+              <Button color="inherit" onClick={() => inputs.reset(calc.inputs)}>
+                Load the saved calc
+              </Button>
+            ) : undefined
+          }
+        >
+          {conflict
+            ? 'Someone else saved this calc after you opened it; their change is kept. Load the saved calc (your edits here are then lost), or copy your values first.'
+            : errorMessages(saveError).join(' ')}
+        </Alert>
+      )}
+
+      <Tabs
+        value={tab}
+        onChange={(_, value: TabName) => setTab(value)}
+        variant="scrollable"
+        aria-label="Calculation sections"
+      >
+        {TABS.map((name) => (
+          <Tab key={name} value={name} label={name} />
+        ))}
+      </Tabs>
+
+      <PreliminaryWatermark show={!ofRecord}>
+        {tab === 'Storey table' && (
+          <Section title="Storey table">
+            <StoreyTable
+              rows={inputs.rows}
+              units={units}
+              onChange={inputs.setRows}
+              readOnly={!editable}
+            />
+            <AnalysisSettings inputs={inputs} readOnly={!editable} />
+          </Section>
+        )}
+        {tab === 'Design spectrum' && (
+          <Section title="Design spectrum">
+            <SpectrumEditor
+              spectrum={inputs.spectrum}
+              modes={result?.modes ?? []}
+              onChange={inputs.setSpectrum}
+              readOnly={!editable}
+            />
+          </Section>
+        )}
+        {tab === 'Results' && (
+          <Stack spacing={2}>
+            {result === null && (
+              <Alert severity="info">
+                Not analysed yet.{editable ? ' Analyse to see the modes and responses.' : ''}
+              </Alert>
+            )}
+            {result && calc.analysisStale && (
+              <Alert severity="warning" role="alert">
+                These results are older than the saved inputs (analysed{' '}
+                {calc.analysedAt ? new Date(calc.analysedAt).toLocaleString() : ''}, inputs changed{' '}
+                {new Date(calc.inputsChangedAt).toLocaleString()}). Analyse again before relying on
+                them.
+              </Alert>
+            )}
+            {dirty && (
+              <Alert severity="info">
+                You have unsaved changes; these results are for the saved inputs.
+              </Alert>
+            )}
+            {result && resultsMatchStoreys && (
+              <>
+                <Typography color="text.secondary">
+                  Engine {calc.engineVersion}
+                  {calc.analysedAt ? `, ${new Date(calc.analysedAt).toLocaleString()}` : ''}.
+                </Typography>
+                <AnalysisResults result={result} storeys={calc.inputs.storeys} units={units} />
+              </>
+            )}
+          </Stack>
+        )}
+        {tab === 'Review' && (
+          <Section title="Review">
+            <Stack spacing={3}>
+              <ReviewActions
+                calc={calc}
+                user={user}
+                dirty={dirty}
+                onRevised={(draft) => void navigate(`/calculations/${draft.id}`)}
+              />
+              <CommentThread calc={calc} />
+            </Stack>
+          </Section>
+        )}
+        {tab === 'History' && (
+          <Section title="History">
+            <HistoryPanel calc={calc} />
+          </Section>
+        )}
+      </PreliminaryWatermark>
+    </Stack>
+  );
+}

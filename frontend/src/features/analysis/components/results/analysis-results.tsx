@@ -1,0 +1,76 @@
+import { Alert, Box, Card, CardContent, Typography } from '@mui/material';
+import type { AnalysisResponse, StoreyInput } from '@tiermode/shared-types';
+import type { ReactNode } from 'react';
+import type { UnitSystem } from '@/lib/units';
+import { elevations } from '../../model/storey-rows';
+import { CorrelationTable } from './correlation-table';
+import { MassChart } from './mass-chart';
+import { MethodView } from './method-view';
+import { ModeShapeChart } from './mode-shape-chart';
+import { ModesTable } from './modes-table';
+import { ResponseProfiles } from './response-profiles';
+
+export function Section({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <Card variant="outlined" component="section" aria-label={title}>
+      <CardContent>
+        <Typography variant="h2" gutterBottom>
+          {title}
+        </Typography>
+        {children}
+      </CardContent>
+    </Card>
+  );
+}
+
+/**
+ * Everything an analysis returns, for the storeys it was computed from: warnings, modes and
+ * participation, responses and their combinations, and the method step by step.
+ */
+export function AnalysisResults({
+  result,
+  storeys,
+  units,
+}: {
+  result: AnalysisResponse;
+  storeys: StoreyInput[];
+  units: UnitSystem;
+}) {
+  const levels = elevations(storeys);
+  return (
+    <>
+      {result.warnings.length > 0 && (
+        <Alert severity="warning" aria-label="Warnings">
+          {result.warnings.map((w) => (
+            <div key={w}>{w}</div>
+          ))}
+        </Alert>
+      )}
+      <Section title="Modes">
+        <ModesTable modes={result.modes} />
+        <Box sx={{ display: 'grid', gridTemplateColumns: { md: '1fr 1fr' }, gap: 2, mt: 2 }}>
+          <ModeShapeChart
+            modes={result.modes}
+            elevations={levels.slice(0, result.modes[0]?.shape.length)}
+            units={units}
+          />
+          <MassChart modes={result.modes} />
+        </Box>
+      </Section>
+      <Section title="Responses">
+        <ResponseProfiles
+          result={result}
+          elevations={levels.slice(0, result.combined.cqc.storeyShear.length)}
+          units={units}
+        />
+        <Typography variant="h3" sx={{ mt: 2 }} gutterBottom>
+          Correlation coefficients (CQC)
+        </Typography>
+        <CorrelationTable correlation={result.correlation} />
+      </Section>
+      <Section title="Method, step by step">
+        <MethodView storeys={storeys} result={result} units={units} />
+      </Section>
+    </>
+  );
+}

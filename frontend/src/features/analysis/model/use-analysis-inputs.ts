@@ -1,0 +1,69 @@
+import type { AnalysisRequest, SpectrumInput } from '@tiermode/shared-types';
+import { useCallback, useMemo, useState } from 'react';
+import { fromStoreyInputs, storeyProblems, toStoreyInputs, type StoreyRow } from './storey-rows';
+
+export type ModeCountChoice = 'all' | number;
+
+/** Everything a designer edits for one analysis, as the screens hold it. */
+export interface AnalysisInputsState {
+  rows: StoreyRow[];
+  setRows: (rows: StoreyRow[]) => void;
+  spectrum: SpectrumInput;
+  setSpectrum: (spectrum: SpectrumInput) => void;
+  /** Damping as typed, in % of critical. */
+  damping: string;
+  setDamping: (damping: string) => void;
+  dampingProblem: string | null;
+  modeCount: ModeCountChoice;
+  setModeCount: (modeCount: ModeCountChoice) => void;
+  /** The inputs as the API takes them, or null while any of them is not valid. */
+  request: AnalysisRequest | null;
+  /** Starts again from stored inputs (after a save, or to discard edits). */
+  reset: (inputs: AnalysisRequest) => void;
+}
+
+const percent = (ratio: number) => String(Number((ratio * 100).toPrecision(10)));
+
+/** The editable inputs of an analysis, starting from `initial`. */
+export function useAnalysisInputs(initial: AnalysisRequest): AnalysisInputsState {
+  const [rows, setRows] = useState<StoreyRow[]>(() => fromStoreyInputs(initial.storeys));
+  const [spectrum, setSpectrum] = useState<SpectrumInput>(initial.spectrum);
+  const [damping, setDamping] = useState(() => percent(initial.dampingRatio));
+  const [modeCount, setModeCount] = useState<ModeCountChoice>(initial.modeCount ?? 'all');
+
+  const dampingRatio = Number(damping) / 100;
+  const dampingProblem =
+    damping.trim() === '' || !(dampingRatio > 0 && dampingRatio < 1)
+      ? 'Damping must be more than 0% and less than 100%'
+      : null;
+  const request = useMemo<AnalysisRequest | null>(() => {
+    if (storeyProblems(rows).length > 0 || dampingProblem) return null;
+    return {
+      storeys: toStoreyInputs(rows),
+      spectrum,
+      dampingRatio,
+      ...(modeCount !== 'all' && modeCount <= rows.length ? { modeCount } : {}),
+    };
+  }, [rows, spectrum, dampingRatio, dampingProblem, modeCount]);
+
+  const reset = useCallback((inputs: AnalysisRequest) => {
+    setRows(fromStoreyInputs(inputs.storeys));
+    setSpectrum(inputs.spectrum);
+    setDamping(percent(inputs.dampingRatio));
+    setModeCount(inputs.modeCount ?? 'all');
+  }, []);
+
+  return {
+    rows,
+    setRows,
+    spectrum,
+    setSpectrum,
+    damping,
+    setDamping,
+    dampingProblem,
+    modeCount,
+    setModeCount,
+    request,
+    reset,
+  };
+}

@@ -1,0 +1,127 @@
+import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type {
+  AnalysisResponse,
+  AuditEventDto,
+  CalculationDto,
+  CalculationInputs,
+  CalculationListQuery,
+  CalculationSummaryDto,
+  CreateCalculationRequest,
+  CreateCommentRequest,
+  SealCheckResponse,
+  UpdateCalculationRequest,
+} from '@tiermode/shared-types';
+import { api } from '@/lib/api-client';
+
+export const calculationKeys = {
+  all: ['calculations'] as const,
+  list: (query: CalculationListQuery) => ['calculations', 'list', query] as const,
+  one: (id: string) => ['calculations', id] as const,
+  seal: (id: string) => ['calculations', id, 'seal'] as const,
+  history: (id: string) => ['calculations', id, 'history'] as const,
+};
+
+export function useCalculations(query: CalculationListQuery) {
+  return useQuery({
+    queryKey: calculationKeys.list(query),
+    queryFn: async () =>
+      (await api.get<CalculationSummaryDto[]>('/calculations', { params: query })).data,
+    placeholderData: keepPreviousData,
+  });
+}
+
+export function useCalculation(id: string) {
+  return useQuery({
+    queryKey: calculationKeys.one(id),
+    queryFn: async () => (await api.get<CalculationDto>(`/calculations/${id}`)).data,
+    retry: false,
+  });
+}
+
+export function useSeal(id: string, enabled: boolean) {
+  return useQuery({
+    queryKey: calculationKeys.seal(id),
+    queryFn: async () => (await api.get<SealCheckResponse>(`/calculations/${id}/seal`)).data,
+    enabled,
+  });
+}
+
+export function useHistory(id: string) {
+  return useQuery({
+    queryKey: calculationKeys.history(id),
+    queryFn: async () => (await api.get<AuditEventDto[]>(`/calculations/${id}/history`)).data,
+  });
+}
+
+/** After any change: the calc, its history and every list are refetched. */
+function useRefresh() {
+  const client = useQueryClient();
+  return (calc?: CalculationDto) => {
+    if (calc) client.setQueryData(calculationKeys.one(calc.id), calc);
+    return client.invalidateQueries({ queryKey: calculationKeys.all });
+  };
+}
+
+export function useCreateCalculation(projectId: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (body: CreateCalculationRequest) =>
+      (await api.post<CalculationDto>(`/projects/${projectId}/calculations`, body)).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
+export function useSaveCalculation(id: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (body: UpdateCalculationRequest) =>
+      (await api.patch<CalculationDto>(`/calculations/${id}`, body)).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
+/** Saves the inputs when they changed, then analyses what is stored. */
+export function useSaveAndAnalyse(id: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (change: { version: number; inputs?: CalculationInputs }) => {
+      if (change.inputs) {
+        await api.patch<CalculationDto>(`/calculations/${id}`, change);
+      }
+      await api.post<AnalysisResponse>(`/calculations/${id}/analyse`);
+      return (await api.get<CalculationDto>(`/calculations/${id}`)).data;
+    },
+    onSuccess: (calc) => refresh(calc),
+    onError: () => refresh(),
+  });
+}
+
+type Step = 'submit' | 'return' | 'lock' | 'revise';
+
+/** submit, return { comment }, lock { statement } or revise (which answers with the new draft). */
+export function useReviewStep(id: string, step: Step) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (body: object = {}) =>
+      (await api.post<CalculationDto>(`/calculations/${id}/${step}`, body)).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
+export function useAddComment(id: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (body: CreateCommentRequest) =>
+      (await api.post<CalculationDto>(`/calculations/${id}/comments`, body)).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
+export function useResolveComment() {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async ({ commentId, resolved }: { commentId: string; resolved: boolean }) =>
+      (await api.patch<CalculationDto>(`/comments/${commentId}`, { resolved })).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}

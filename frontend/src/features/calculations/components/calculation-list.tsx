@@ -1,0 +1,81 @@
+import { Alert, Box, Link } from '@mui/material';
+import { DataGrid, type GridColDef } from '@mui/x-data-grid';
+import type { CalculationListQuery, CalculationSummaryDto } from '@tiermode/shared-types';
+import { Link as RouterLink } from 'react-router';
+import { errorMessages } from '@/lib/api-client';
+import { useCalculations } from '../api/calculations';
+import { StatusChip } from '@/components/feedback/status-chip';
+
+const date = (value: string | null) => (value ? new Date(value).toLocaleDateString() : '');
+
+const columns: GridColDef<CalculationSummaryDto>[] = [
+  {
+    field: 'title',
+    headerName: 'Calculation',
+    flex: 2,
+    minWidth: 220,
+    renderCell: ({ row }) => (
+      <Link component={RouterLink} to={`/calculations/${row.id}`}>
+        {row.title}
+      </Link>
+    ),
+  },
+  { field: 'projectName', headerName: 'Project', flex: 1.5, minWidth: 160 },
+  { field: 'revision', headerName: 'Revision', type: 'number', width: 90 },
+  {
+    field: 'status',
+    headerName: 'Status',
+    width: 200,
+    renderCell: ({ row }) => <StatusChip status={row.status} />,
+  },
+  { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 90 },
+  {
+    field: 'author',
+    headerName: 'Author',
+    width: 150,
+    valueGetter: (_v, row) => row.author.name,
+  },
+  {
+    field: 'reviewer',
+    headerName: 'Reviewer',
+    width: 150,
+    valueGetter: (_v, row) => row.reviewer?.name ?? '',
+  },
+  {
+    field: 'updatedAt',
+    headerName: 'Last change',
+    width: 130,
+    valueFormatter: (value: string) => date(value),
+  },
+];
+
+/** Calcs the caller may read, as the query picks them; each title opens the calc. */
+export function CalculationList({
+  query,
+  label,
+  hideProject = false,
+  empty,
+}: {
+  query: CalculationListQuery;
+  label: string;
+  hideProject?: boolean;
+  empty: string;
+}) {
+  const calcs = useCalculations(query);
+  if (calcs.isError) return <Alert severity="error">{errorMessages(calcs.error).join(' ')}</Alert>;
+  const rows = calcs.data ?? [];
+  return (
+    <Box sx={{ height: rows.length === 0 ? 160 : Math.min(420, 110 + rows.length * 52) }}>
+      <DataGrid
+        aria-label={label}
+        rows={rows}
+        columns={columns}
+        loading={calcs.isPending}
+        columnVisibilityModel={{ projectName: !hideProject }}
+        disableRowSelectionOnClick
+        hideFooter={rows.length <= 100}
+        localeText={{ noRowsLabel: empty }}
+      />
+    </Box>
+  );
+}
