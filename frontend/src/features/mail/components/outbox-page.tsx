@@ -47,9 +47,9 @@ export function OutboxPage() {
     <Stack spacing={2}>
       <Typography variant="h1">Outbox</Typography>
       <Typography color="text.secondary">
-        Mail goes out over SMTP. Each message appears as sent (or waiting, or failed, with its error)
-        and, without a mail server configured, a second time as the local catcher received it.
-        Select a message to read it.
+        Mail goes out over SMTP. Each message appears as sent (or waiting, or failed, with its
+        error) and, without a mail server configured, a second time as the local catcher received
+        it. Select a message to read it.
       </Typography>
       {outbox.isError && <Alert severity="error">{errorMessages(outbox.error).join(' ')}</Alert>}
       <Box sx={{ height: Math.min(520, 160 + rows.length * 52) }}>
