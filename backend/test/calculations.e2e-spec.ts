@@ -42,6 +42,25 @@ describe('Saved calculations (drafts)', () => {
     expect(res.body.author.name).toBe('Mira Castell');
   });
 
+  it('keeps the display units, which change no result', async () => {
+    const calc = (await createCalc().expect(201)).body;
+    expect(calc.displayUnits).toBe('SI');
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    const fresh = await http().get(`/api/calculations/${calc.id}`).set(as('designer'));
+    const res = await http()
+      .patch(`/api/calculations/${calc.id}`)
+      .set(as('designer'))
+      .send({ version: fresh.body.version, displayUnits: 'US' })
+      .expect(200);
+    expect(res.body).toMatchObject({ displayUnits: 'US', analysisStale: false });
+    const bad = await http()
+      .patch(`/api/calculations/${calc.id}`)
+      .set(as('designer'))
+      .send({ version: res.body.version, displayUnits: 'imperial' })
+      .expect(400);
+    expect(bad.body.message).toEqual(['displayUnits must be "SI" or "US"']);
+  });
+
   it('keeps the storey labels with the inputs', async () => {
     const labelled = inputs();
     labelled.storeys[0].label = 'Ground';

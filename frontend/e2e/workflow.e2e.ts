@@ -82,12 +82,16 @@ describe('The review workflow, across the four roles', () => {
       await page.getByRole('heading', { name: CALC }).waitFor();
       calcUrl = new URL(page.url()).pathname;
       await page.getByRole('note', { name: 'Preliminary' }).waitFor();
+      expect(await page.getByTestId('preliminary-watermark').count()).toBe(1);
 
       await editMass(page, 2, '455');
       await expect
         .poll(() => page.getByRole('status').first().textContent())
         .toBe('Unsaved changes');
       await screenshot(page, 'workflow-02-storeys-edited');
+      // The calc is kept in US customary units for this office; values stay SI on the server.
+      await page.getByRole('button', { name: 'US (kip, ft, in)' }).click();
+      await page.getByRole('columnheader', { name: /Seismic weight \(kip/ }).waitFor();
       await saveAndAnalyse(page);
       await screenshot(page, 'workflow-03-results');
 
@@ -182,6 +186,9 @@ describe('The review workflow, across the four roles', () => {
       await screenshot(page, 'workflow-09-library');
       await library.getByRole('link', { name: CALC }).click();
       await page.getByText('The seal is valid').waitFor();
+      expect(
+        await page.getByRole('button', { name: 'US (kip, ft, in)' }).getAttribute('aria-pressed'),
+      ).toBe('true');
       await openTab(page, 'Results');
       await page.getByRole('region', { name: 'Method, step by step' }).waitFor();
       expect(await page.getByRole('button', { name: 'Save' }).count()).toBe(0);

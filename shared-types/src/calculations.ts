@@ -4,6 +4,10 @@ import type { CodeBasis } from './projects';
 export const CALCULATION_STATUSES = ['draft', 'submitted', 'locked', 'superseded'] as const;
 export type CalculationStatus = (typeof CALCULATION_STATUSES)[number];
 
+/** How a calc's values are shown and typed: SI (t, kN/m, m) or US customary (kip, kip/in, ft). */
+export const DISPLAY_UNITS = ['SI', 'US'] as const;
+export type DisplayUnits = (typeof DISPLAY_UNITS)[number];
+
 /** A calculation's inputs: the same shapes as `POST /api/analysis`. */
 export type CalculationInputs = AnalysisRequest;
 
@@ -18,6 +22,8 @@ export interface CalculationDto {
   revision: number;
   status: CalculationStatus;
   inputs: CalculationInputs;
+  /** The units the calc is shown in; values are stored in SI whatever this says. */
+  displayUnits: DisplayUnits;
   /** The stored analysis of the inputs, or null until analysed. */
   analysis: AnalysisResponse | null;
   engineVersion: string | null;
@@ -46,6 +52,8 @@ export interface CalculationDto {
 export interface CreateCalculationRequest {
   title: string;
   inputs: CalculationInputs;
+  /** Default `SI`. */
+  displayUnits?: DisplayUnits;
 }
 
 /** `PATCH /api/calculations/:id`. */
@@ -53,6 +61,7 @@ export interface UpdateCalculationRequest {
   version: number;
   title?: string;
   inputs?: CalculationInputs;
+  displayUnits?: DisplayUnits;
 }
 
 /** The record a lock seals: who accepted the calc, under which licence, when, and the hash. */

@@ -13,6 +13,7 @@ import {
   CALCULATION_STATUSES,
   type AnalysisResponse,
   type CalculationInputs,
+  type DisplayUnits,
   type CalculationStatus,
   type SealDto,
 } from '@tiermode/shared-types';
@@ -24,6 +25,7 @@ import { ReviewComment } from './review-comment.entity';
 export class Calculation {
   [OptionalProps]?:
     | 'revision'
+    | 'displayUnits'
     | 'status'
     | 'analysis'
     | 'engineVersion'
@@ -57,6 +59,10 @@ export class Calculation {
   /** Storeys, spectrum, damping and mode selection, in SI base units. */
   @Property({ type: 'json' })
   inputs!: CalculationInputs;
+
+  /** How the calc is shown (values are SI whatever this says); not sealed, it changes no number. */
+  @Property({ type: 'string', length: 2, default: 'SI' })
+  displayUnits: DisplayUnits = 'SI';
 
   /** The engine's result for the inputs as they were at `analysedAt`. */
   @Property({ type: 'json', nullable: true })

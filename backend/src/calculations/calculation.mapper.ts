@@ -17,6 +17,7 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     revision: calc.revision,
     status: calc.status,
     inputs: calc.inputs,
+    displayUnits: calc.displayUnits,
     analysis: calc.analysis,
     engineVersion: calc.engineVersion,
     inputsChangedAt: calc.inputsChangedAt.toISOString(),

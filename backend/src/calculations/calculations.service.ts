@@ -84,7 +84,13 @@ export class CalculationsService {
     );
     const inputs = plainInputs(body.inputs);
     this.analysis.validate(inputs, 'inputs.');
-    const calc = this.em.create(Calculation, { project, title: body.title, inputs, author });
+    const calc = this.em.create(Calculation, {
+      project,
+      title: body.title,
+      inputs,
+      displayUnits: body.displayUnits ?? 'SI',
+      author,
+    });
     await this.audit.commit(this.em, { calculationId: calc.id, actor: author, action: 'created' });
     return toCalculationDto(calc);
   }
@@ -116,6 +122,8 @@ export class CalculationsService {
       throw error;
     }
     if (body.title !== undefined) calc.title = body.title;
+    // Display units change how values are shown, not what they are: the results stay current.
+    if (body.displayUnits !== undefined) calc.displayUnits = body.displayUnits;
     if (body.inputs !== undefined) {
       const inputs = plainInputs(body.inputs);
       this.analysis.validate(inputs, 'inputs.');
@@ -126,7 +134,11 @@ export class CalculationsService {
       calculationId: calc.id,
       actor,
       action: 'edited',
-      detail: { title: body.title !== undefined, inputs: body.inputs !== undefined },
+      detail: {
+        title: body.title !== undefined,
+        inputs: body.inputs !== undefined,
+        displayUnits: body.displayUnits ?? null,
+      },
     });
     return toCalculationDto(calc);
   }
@@ -253,6 +265,7 @@ export class CalculationsService {
       title: calc.title,
       revision: calc.revision + 1,
       inputs: structuredClone(calc.inputs),
+      displayUnits: calc.displayUnits,
       author,
       previousRevision: calc,
     });

@@ -8,6 +8,7 @@ import { Migration20261201233733 } from './Migration20261201233733';
 import { Migration20261201235500 } from './Migration20261201235500';
 import { Migration20261202000500 } from './Migration20261202000500';
 import { Migration20261202004852 } from './Migration20261202004852';
+import { Migration20261202012253 } from './Migration20261202012253';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -20,4 +21,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201235500', class: Migration20261201235500 },
   { name: 'Migration20261202000500', class: Migration20261202000500 },
   { name: 'Migration20261202004852', class: Migration20261202004852 },
+  { name: 'Migration20261202012253', class: Migration20261202012253 },
 ];

@@ -1,7 +1,13 @@
-import type { CreateCalculationRequest, UpdateCalculationRequest } from '@tiermode/shared-types';
+import {
+  DISPLAY_UNITS,
+  type CreateCalculationRequest,
+  type DisplayUnits,
+  type UpdateCalculationRequest,
+} from '@tiermode/shared-types';
 import { Transform, Type } from 'class-transformer';
 import {
   IsDefined,
+  IsIn,
   IsInt,
   IsNotEmpty,
   IsObject,
@@ -26,6 +32,10 @@ export class CreateCalculationDto implements CreateCalculationRequest {
   @ValidateNested()
   @Type(() => AnalysisRequestDto)
   inputs!: AnalysisRequestDto;
+
+  @IsOptional()
+  @IsIn(DISPLAY_UNITS, { message: 'displayUnits must be "SI" or "US"' })
+  displayUnits?: DisplayUnits;
 }
 
 export class UpdateCalculationDto implements UpdateCalculationRequest {
@@ -45,4 +55,8 @@ export class UpdateCalculationDto implements UpdateCalculationRequest {
   @ValidateNested()
   @Type(() => AnalysisRequestDto)
   inputs?: AnalysisRequestDto;
+
+  @IsOptional()
+  @IsIn(DISPLAY_UNITS, { message: 'displayUnits must be "SI" or "US"' })
+  displayUnits?: DisplayUnits;
 }

@@ -46,7 +46,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
   const ability = useAppAbility();
   const navigate = useNavigate();
   const inputs = useAnalysisInputs(calc.inputs);
-  const [units, setUnits] = useState<UnitSystem>('SI');
+  const [units, setUnits] = useState<UnitSystem>(calc.displayUnits);
   const [tab, setTab] = useState<TabName>('Storey table');
   const save = useSaveCalculation(calc.id);
   const analyse = useSaveAndAnalyse(calc.id);
@@ -59,16 +59,22 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
   };
   const editable = calc.status === 'draft' && canOn(ability, 'update', 'Calculation', record);
   const ofRecord = calc.status === 'locked' || calc.status === 'superseded';
-  const dirty = editable && !sameJson(inputs.request, calc.inputs);
+  // The units are saved with the calc by whoever may edit it; anyone else switches them for
+  // their own view only.
+  const dirty = editable && (!sameJson(inputs.request, calc.inputs) || units !== calc.displayUnits);
   const saveError = save.error ?? analyse.error;
   const conflict = saveError instanceof AxiosError && saveError.response?.status === 409;
   const busy = save.isPending || analyse.isPending;
 
   const doSave = () =>
-    inputs.request && save.mutate({ version: calc.version, inputs: inputs.request });
+    inputs.request &&
+    save.mutate({ version: calc.version, inputs: inputs.request, displayUnits: units });
   const doAnalyse = () =>
     analyse.mutate(
-      { version: calc.version, ...(dirty && inputs.request ? { inputs: inputs.request } : {}) },
+      {
+        version: calc.version,
+        ...(dirty && inputs.request ? { inputs: inputs.request, displayUnits: units } : {}),
+      },
       { onSuccess: () => setTab('Results') },
     );
 

@@ -8,6 +8,7 @@ import type {
   CalculationSummaryDto,
   CreateCalculationRequest,
   CreateCommentRequest,
+  DisplayUnits,
   SealCheckResponse,
   UpdateCalculationRequest,
 } from '@tiermode/shared-types';
@@ -84,8 +85,12 @@ export function useSaveCalculation(id: string) {
 export function useSaveAndAnalyse(id: string) {
   const refresh = useRefresh();
   return useMutation({
-    mutationFn: async (change: { version: number; inputs?: CalculationInputs }) => {
-      if (change.inputs) {
+    mutationFn: async (change: {
+      version: number;
+      inputs?: CalculationInputs;
+      displayUnits?: DisplayUnits;
+    }) => {
+      if (change.inputs || change.displayUnits) {
         await api.patch<CalculationDto>(`/calculations/${id}`, change);
       }
       await api.post<AnalysisResponse>(`/calculations/${id}/analyse`);
