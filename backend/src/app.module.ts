@@ -14,6 +14,7 @@ import { loadEnvironment } from './config/environment';
 import { FRONTEND_DIST } from './config/paths';
 import { DatabaseModule } from './database/database.module';
 import { HealthModule } from './health/health.module';
+import { ImportsModule } from './imports/imports.module';
 import { MailModule } from './mail/mail.module';
 import { ProjectsModule } from './projects/projects.module';
 import { UsersModule } from './users/users.module';
@@ -34,6 +35,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     ProjectsModule,
     CalculationsModule,
     AnalysisModule,
+    ImportsModule,
     VerificationModule,
     HealthModule,
     MailModule,

@@ -375,6 +375,33 @@ const MATRIX: Cell[] = [
         .send({ kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 8 }),
   },
   {
+    route: 'POST /api/imports/storeys',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/imports/storeys')
+        .set(as(c))
+        .field('units', 'SI')
+        .attach(
+          'file',
+          Buffer.from('Label,Height (m),Mass (t),Stiffness (kN/m)\nL1,3.5,300,400000\n'),
+          'storeys.csv',
+        ),
+  },
+  {
+    route: 'GET /api/imports/storeys/template.csv',
+    allowed: everyone,
+    ok: 200,
+    call: (c) => http().get('/api/imports/storeys/template.csv').set(as(c)),
+  },
+  {
+    route: 'GET /api/imports/storeys/template.xlsx',
+    allowed: everyone,
+    ok: 200,
+    call: (c) => http().get('/api/imports/storeys/template.xlsx').set(as(c)),
+  },
+  {
     route: 'GET /api/verification',
     allowed: everyone,
     ok: 200,

@@ -189,3 +189,27 @@ export interface ColumnStiffnessResponse {
   /** Each group's share, N/m, in the order given. */
   contributions: number[];
 }
+
+/** One storey of an uploaded table, in SI base units (`POST /api/imports/storeys`). */
+export interface ImportedStorey {
+  label: string;
+  /** m */
+  height: number;
+  /** kg */
+  mass: number;
+  /** N/m */
+  stiffness: number;
+}
+
+/** A problem in an uploaded table: the spreadsheet row (the header is row 1) and column. */
+export interface ImportCellError {
+  row: number;
+  column: string;
+  message: string;
+}
+
+/** `POST /api/imports/storeys`: the storeys read and every problem found. */
+export interface StoreyImportResponse {
+  storeys: ImportedStorey[];
+  errors: ImportCellError[];
+}

@@ -28,6 +28,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const response = host.switchToHttp().getResponse<Response>();
     const { statusCode, message } = this.describe(exception);
     const body: ApiErrorBody = {
+      // Anything else the thrower put beside the message (an upload's preview rows, say).
+      ...extraFields(exception),
       statusCode,
       message: Array.isArray(message) ? message : [message],
       error: httpStatusName(statusCode),
@@ -69,6 +71,16 @@ export class ApiExceptionFilter implements ExceptionFilter {
     );
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
   }
+}
+
+/** The fields of an HttpException's payload other than the standard three. */
+function extraFields(exception: unknown): Record<string, unknown> {
+  if (!(exception instanceof HttpException)) return {};
+  const payload = exception.getResponse();
+  if (typeof payload !== 'object' || payload === null) return {};
+  return Object.fromEntries(
+    Object.entries(payload).filter(([key]) => !['statusCode', 'message', 'error'].includes(key)),
+  );
 }
 
 /**

@@ -1,0 +1,178 @@
+import type { DisplayUnits, ImportCellError, ImportedStorey } from '@tiermode/shared-types';
+import { ANALYSIS_LIMITS } from '@tiermode/shared-types';
+
+/**
+ * Exact conversion factors to SI (NIST SP 811, appendix B): 1 ft = 0.3048 m; 1 lbf =
+ * 4.4482216152605 N; a kip is 1000 lbf. A weight in kip becomes a mass through standard gravity,
+ * g = 9.80665 m/s^2 (CGPM 1901), so 1 kip of seismic weight = 453.59237 kg.
+ */
+const FOOT = 0.3048;
+const KIP = 4448.2216152605;
+const G = 9.80665;
+
+interface Column {
+  key: 'label' | 'height' | 'mass' | 'stiffness';
+  /** The header as the template writes it. */
+  header: string;
+  /** Header words that name this column (lower case, before any unit in parentheses). */
+  names: string[];
+  unit: string | null;
+  toSi: number;
+}
+
+export const STOREY_COLUMNS: Record<DisplayUnits, Column[]> = {
+  SI: [
+    { key: 'label', header: 'Label', names: ['label'], unit: null, toSi: 1 },
+    { key: 'height', header: 'Height (m)', names: ['height'], unit: 'm', toSi: 1 },
+    { key: 'mass', header: 'Mass (t)', names: ['mass'], unit: 't', toSi: 1000 },
+    {
+      key: 'stiffness',
+      header: 'Stiffness (kN/m)',
+      names: ['stiffness'],
+      unit: 'kN/m',
+      toSi: 1000,
+    },
+  ],
+  US: [
+    { key: 'label', header: 'Label', names: ['label'], unit: null, toSi: 1 },
+    { key: 'height', header: 'Height (ft)', names: ['height'], unit: 'ft', toSi: FOOT },
+    {
+      key: 'mass',
+      header: 'Seismic weight (kip)',
+      names: ['seismic weight', 'weight'],
+      unit: 'kip',
+      toSi: KIP / G,
+    },
+    {
+      key: 'stiffness',
+      header: 'Stiffness (kip/in)',
+      names: ['stiffness'],
+      unit: 'kip/in',
+      toSi: KIP / (FOOT / 12),
+    },
+  ],
+};
+
+/** An invented three-storey example, storey 1 (the base) first, for the templates. */
+export const TEMPLATE_EXAMPLE: Record<DisplayUnits, (string | number)[][]> = {
+  SI: [
+    ['Level 1', 4.2, 420, 600000],
+    ['Level 2', 3.6, 400, 540000],
+    ['Roof', 3.6, 300, 360000],
+  ],
+  US: [
+    ['Level 1', 14, 925, 3400],
+    ['Level 2', 12, 880, 3100],
+    ['Roof', 12, 660, 2050],
+  ],
+};
+
+const split = (header: string) => {
+  const match = /^\s*([^(]*?)\s*(?:\((.*)\))?\s*$/.exec(header);
+  return { name: (match?.[1] ?? header).toLowerCase(), unit: match?.[2]?.trim() ?? null };
+};
+
+/**
+ * Reads a storey table (first row the headers, then storey 1 at the base upwards) into SI
+ * storeys. Every problem is reported with the spreadsheet's row number (the header is row 1) and
+ * the column, and a row with a problem is left out of `storeys`. Blank rows are skipped.
+ */
+export function parseStoreyTable(
+  cells: readonly (readonly string[])[],
+  units: DisplayUnits,
+): { storeys: ImportedStorey[]; errors: ImportCellError[] } {
+  const columns = STOREY_COLUMNS[units];
+  const errors: ImportCellError[] = [];
+  const nonBlank = cells.filter((row) => row.some((c) => c.trim() !== ''));
+  if (nonBlank.length === 0) {
+    return { storeys: [], errors: [{ row: 1, column: 'file', message: 'The file has no rows' }] };
+  }
+  const headerRow = cells.indexOf(nonBlank[0]);
+  const headers = nonBlank[0].map(split);
+  const at = new Map<Column['key'], number>();
+  for (const column of columns) {
+    const index = headers.findIndex((h) => column.names.includes(h.name));
+    if (index < 0) {
+      if (column.key !== 'label') {
+        errors.push({
+          row: headerRow + 1,
+          column: column.header,
+          message: `The column "${column.header}" is missing (the ${units} template's headers are ${columns.map((c) => `"${c.header}"`).join(', ')})`,
+        });
+      }
+      continue;
+    }
+    const given = headers[index].unit;
+    if (column.unit && given !== null && given !== column.unit) {
+      errors.push({
+        row: headerRow + 1,
+        column: column.header,
+        message: `The column "${nonBlank[0][index].trim()}" is in ${given}, but the ${units} table takes ${column.unit}: choose the other units or convert the column`,
+      });
+    }
+    at.set(column.key, index);
+  }
+  if (errors.length > 0) return { storeys: [], errors };
+
+  const storeys: ImportedStorey[] = [];
+  cells.forEach((row, r) => {
+    if (r <= headerRow || row.every((c) => c.trim() === '')) return;
+    const rowNumber = r + 1;
+    const values: Partial<ImportedStorey> = {};
+    let ok = true;
+    for (const column of columns) {
+      const index = at.get(column.key);
+      const text = index === undefined ? '' : (row[index] ?? '').trim();
+      if (column.key === 'label') {
+        if (text.length > 60) {
+          errors.push({
+            row: rowNumber,
+            column: column.header,
+            message: 'A label can be at most 60 characters',
+          });
+          ok = false;
+        }
+        values.label = text;
+        continue;
+      }
+      const number = text === '' ? Number.NaN : Number(text.replace(/,/g, ''));
+      if (text === '') {
+        errors.push({ row: rowNumber, column: column.header, message: 'The cell is empty' });
+        ok = false;
+      } else if (!Number.isFinite(number)) {
+        errors.push({
+          row: rowNumber,
+          column: column.header,
+          message: `"${text.slice(0, 40)}" is not a number`,
+        });
+        ok = false;
+      } else if (number <= 0) {
+        errors.push({
+          row: rowNumber,
+          column: column.header,
+          message: `${text} must be more than 0`,
+        });
+        ok = false;
+      } else {
+        values[column.key] = number * column.toSi;
+      }
+    }
+    if (ok) storeys.push(values as ImportedStorey);
+  });
+  if (storeys.length === 0 && errors.length === 0) {
+    errors.push({
+      row: headerRow + 2,
+      column: 'file',
+      message: 'The table has headers but no storeys',
+    });
+  }
+  const rowsRead = storeys.length + new Set(errors.map((e) => e.row)).size;
+  if (rowsRead > ANALYSIS_LIMITS.maxStoreys) {
+    errors.push({
+      row: headerRow + 2 + ANALYSIS_LIMITS.maxStoreys,
+      column: 'file',
+      message: `At most ${ANALYSIS_LIMITS.maxStoreys} storeys can be analysed`,
+    });
+  }
+  return { storeys, errors };
+}

@@ -1,0 +1,170 @@
+import JSZip from 'jszip';
+import type { StoreyImportResponse } from '@tiermode/shared-types';
+import { sampleInputs, useSignedInApp } from './support/fixtures';
+
+const { http, as } = useSignedInApp();
+
+const upload = (bytes: Buffer | string, name: string, units = 'SI') =>
+  http()
+    .post('/api/imports/storeys')
+    .set(as('designer'))
+    .field('units', units)
+    .attach('file', Buffer.from(bytes), name);
+
+const messages = (body: { message: string[] }) => body.message.join('\n');
+
+describe('POST /api/imports/storeys', () => {
+  it('reads the SI CSV template back as the same storeys, in SI base units', async () => {
+    const template = await http()
+      .get('/api/imports/storeys/template.csv?units=SI')
+      .set(as('designer'))
+      .expect(200)
+      .expect('Content-Type', /text\/csv/);
+    const res = await upload(template.text, 'storeys.csv').expect(200);
+    expect((res.body as StoreyImportResponse).storeys).toEqual([
+      { label: 'Level 1', height: 4.2, mass: 420_000, stiffness: 600_000_000 },
+      { label: 'Level 2', height: 3.6, mass: 400_000, stiffness: 540_000_000 },
+      { label: 'Roof', height: 3.6, mass: 300_000, stiffness: 360_000_000 },
+    ]);
+  });
+
+  it('reads the US XLSX template back, converting ft, kip of weight and kip/in to SI', async () => {
+    const template = await http()
+      .get('/api/imports/storeys/template.xlsx?units=US')
+      .set(as('designer'))
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+    const res = await upload(template.body as Buffer, 'storeys.xlsx', 'US').expect(200);
+    const [first] = (res.body as StoreyImportResponse).storeys;
+    // 1 ft = 0.3048 m; 1 kip = 4448.2216152605 N, / 9.80665 m/s^2 as a weight; 1 in = 0.0254 m
+    // (NIST SP 811, appendix B).
+    expect(first.label).toBe('Level 1');
+    expect(first.height).toBeCloseTo(14 * 0.3048, 12);
+    expect(first.mass).toBeCloseTo((925 * 4448.2216152605) / 9.80665, 6);
+    expect(first.stiffness).toBeCloseTo((3400 * 4448.2216152605) / 0.0254, 3);
+  });
+
+  it('names the row and column of every bad cell, and still returns the good rows', async () => {
+    const csv = [
+      'Label,Height (m),Mass (t),Stiffness (kN/m)',
+      'L1,4,350,520000',
+      'L2,3.5,abc,480000',
+      'L3,-3.5,340,450000',
+      'Roof,3.5,,320000',
+    ].join('\n');
+    const res = await upload(csv, 'storeys.csv').expect(400);
+    expect(res.body.errors).toEqual([
+      { row: 3, column: 'Mass (t)', message: '"abc" is not a number' },
+      { row: 4, column: 'Height (m)', message: '-3.5 must be more than 0' },
+      { row: 5, column: 'Mass (t)', message: 'The cell is empty' },
+    ]);
+    expect(messages(res.body)).toContain('Row 3, Mass (t): "abc" is not a number');
+    expect(res.body.storeys).toEqual([
+      { label: 'L1', height: 4, mass: 350_000, stiffness: 520_000_000 },
+    ]);
+  });
+
+  it.each([
+    [
+      'a missing column',
+      'Label,Height (m),Mass (t)\nL1,4,350',
+      'Row 1, Stiffness (kN/m): The column "Stiffness (kN/m)" is missing',
+    ],
+    [
+      'a column in other units',
+      'Label,Height (m),Mass (kg),Stiffness (kN/m)\nL1,4,350000,5',
+      'Row 1, Mass (t): The column "Mass (kg)" is in kg, but the SI table takes t',
+    ],
+    [
+      'headers but no storeys',
+      'Label,Height (m),Mass (t),Stiffness (kN/m)\n',
+      'Row 2, file: The table has headers but no storeys',
+    ],
+    ['an empty file', '', 'file is empty'],
+    ['only blank lines', '\n\n \n', 'Row 1, file: The file has no rows'],
+  ])('refuses %s with a message naming where', async (_what, csv, message) => {
+    const res = await upload(csv, 'storeys.csv').expect(400);
+    expect(messages(res.body)).toContain(message);
+  });
+
+  it('judges a file by its content, not its name', async () => {
+    const png = Buffer.from('89504e470d0a1a0a0000000d49484452', 'hex');
+    const renamed = await upload(png, 'storeys.csv').expect(400);
+    expect(messages(renamed.body)).toContain(
+      'file must be a CSV or XLSX table; this one is a PNG file',
+    );
+    const pdf = await upload('%PDF-1.7\n%\xe2\xe3', 'storeys.xlsx').expect(400);
+    expect(messages(pdf.body)).toContain('this one is a PDF file');
+    const binary = await upload(Buffer.from([0, 1, 2, 3, 0, 255]), 'storeys.csv').expect(400);
+    expect(messages(binary.body)).toContain('this one is neither');
+  });
+
+  it('refuses a file over 2 MB, naming the limit', async () => {
+    const big = 'Label,Height (m),Mass (t),Stiffness (kN/m)\n' + 'L,3,300,400000\n'.repeat(150_000);
+    const res = await upload(big, 'storeys.csv').expect(400);
+    expect(messages(res.body)).toContain('file must be at most 2 MB');
+  });
+
+  it('refuses a ZIP that is no workbook, one with too many parts, and one that unpacks too far', async () => {
+    const notWorkbook = new JSZip();
+    notWorkbook.file('readme.txt', 'hello');
+    const a = await upload(await notWorkbook.generateAsync({ type: 'nodebuffer' }), 'storeys.xlsx');
+    expect(a.status).toBe(400);
+    expect(messages(a.body)).toContain('file is a ZIP archive but not an XLSX workbook');
+
+    const many = new JSZip();
+    many.file('[Content_Types].xml', '<Types/>');
+    many.file('xl/workbook.xml', '<workbook/>');
+    for (let i = 0; i < 600; i += 1) many.file(`xl/part${i}.xml`, '<x/>');
+    const b = await upload(await many.generateAsync({ type: 'nodebuffer' }), 'storeys.xlsx');
+    expect(messages(b.body)).toContain('has more than 500 parts');
+
+    const bomb = new JSZip();
+    bomb.file('[Content_Types].xml', '<Types/>');
+    bomb.file('xl/workbook.xml', '<workbook/>');
+    bomb.file('xl/worksheets/sheet1.xml', Buffer.alloc(30 * 1024 * 1024, 0x20));
+    const packed = await bomb.generateAsync({ type: 'nodebuffer', compression: 'DEFLATE' });
+    expect(packed.length).toBeLessThan(2 * 1024 * 1024);
+    const c = await upload(packed, 'storeys.xlsx');
+    expect(c.status).toBe(400);
+    expect(messages(c.body)).toContain('would unpack to more than 25 MB');
+  });
+
+  it('refuses unknown units, a missing file and a second file', async () => {
+    const units = await upload(
+      'Label,Height (m),Mass (t),Stiffness (kN/m)\nL,3,1,1',
+      'a.csv',
+      'metric',
+    );
+    expect(units.status).toBe(400);
+    expect(messages(units.body)).toBe('units must be "SI" or "US"');
+    const none = await http().post('/api/imports/storeys').set(as('designer')).field('units', 'SI');
+    expect(none.status).toBe(400);
+    expect(messages(none.body)).toBe('file must be a CSV or XLSX storey table');
+    const two = await http()
+      .post('/api/imports/storeys')
+      .set(as('designer'))
+      .attach('file', Buffer.from('a'), 'a.csv')
+      .attach('file', Buffer.from('b'), 'b.csv');
+    expect(two.status).toBe(400);
+    expect(messages(two.body)).toContain('upload one file, in the field "file"');
+  });
+
+  it('changes nothing already saved', async () => {
+    const project = await http().post('/api/projects').set(as('designer')).send({ name: 'Upload' });
+    const calc = await http()
+      .post(`/api/projects/${project.body.id}/calculations`)
+      .set(as('designer'))
+      .send({ title: 'Kept', inputs: sampleInputs() })
+      .expect(201);
+    await upload('Label,Height (m)\nL,abc', 'bad.csv').expect(400);
+    const after = await http().get(`/api/calculations/${calc.body.id}`).set(as('designer'));
+    expect(after.body.inputs).toEqual(calc.body.inputs);
+    expect(after.body.version).toBe(calc.body.version);
+  });
+});
