@@ -46,8 +46,7 @@ function cellText(value: ExcelJS.CellValue): string {
     return String(value);
   }
   if (value instanceof Date) return value.toISOString();
-  if (typeof value === 'object' && 'result' in value)
-    return cellText(value.result);
+  if (typeof value === 'object' && 'result' in value) return cellText(value.result);
   if (typeof value === 'object' && 'richText' in value) {
     return value.richText.map((part) => part.text).join('');
   }
