@@ -49,7 +49,7 @@ describe('POST /api/imports/storeys', () => {
     expect(first.stiffness).toBeCloseTo((3400 * 4448.2216152605) / 0.0254, 3);
   });
 
-  it('names the row and column of every bad cell, and still returns the good rows', async () => {
+  it('names the row and column of every bad cell, and still returns every row', async () => {
     const csv = [
       'Label,Height (m),Mass (t),Stiffness (kN/m)',
       'L1,4,350,520000',
@@ -64,8 +64,12 @@ describe('POST /api/imports/storeys', () => {
       { row: 5, column: 'Mass (t)', message: 'The cell is empty' },
     ]);
     expect(messages(res.body)).toContain('Row 3, Mass (t): "abc" is not a number');
+    // Every row comes back, the unreadable cells as null, so they can be fixed in the grid.
     expect(res.body.storeys).toEqual([
       { label: 'L1', height: 4, mass: 350_000, stiffness: 520_000_000 },
+      { label: 'L2', height: 3.5, mass: null, stiffness: 480_000_000 },
+      { label: 'L3', height: null, mass: 340_000, stiffness: 450_000_000 },
+      { label: 'Roof', height: 3.5, mass: null, stiffness: 320_000_000 },
     ]);
   });
 

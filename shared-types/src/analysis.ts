@@ -190,15 +190,18 @@ export interface ColumnStiffnessResponse {
   contributions: number[];
 }
 
-/** One storey of an uploaded table, in SI base units (`POST /api/imports/storeys`). */
+/**
+ * One storey of an uploaded table, in SI base units (`POST /api/imports/storeys`); a cell that
+ * could not be read is null, and `errors` says why, so the row can be fixed in the grid.
+ */
 export interface ImportedStorey {
   label: string;
   /** m */
-  height: number;
+  height: number | null;
   /** kg */
-  mass: number;
+  mass: number | null;
   /** N/m */
-  stiffness: number;
+  stiffness: number | null;
 }
 
 /** A problem in an uploaded table: the spreadsheet row (the header is row 1) and column. */

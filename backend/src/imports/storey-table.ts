@@ -75,7 +75,8 @@ const split = (header: string) => {
 /**
  * Reads a storey table (first row the headers, then storey 1 at the base upwards) into SI
  * storeys. Every problem is reported with the spreadsheet's row number (the header is row 1) and
- * the column, and a row with a problem is left out of `storeys`. Blank rows are skipped.
+ * the column; that cell is null in `storeys`, so the row can still be brought into the grid and
+ * fixed there. Blank rows are skipped.
  */
 export function parseStoreyTable(
   cells: readonly (readonly string[])[],
@@ -118,8 +119,7 @@ export function parseStoreyTable(
   cells.forEach((row, r) => {
     if (r <= headerRow || row.every((c) => c.trim() === '')) return;
     const rowNumber = r + 1;
-    const values: Partial<ImportedStorey> = {};
-    let ok = true;
+    const values: ImportedStorey = { label: '', height: null, mass: null, stiffness: null };
     for (const column of columns) {
       const index = at.get(column.key);
       const text = index === undefined ? '' : (row[index] ?? '').trim();
@@ -130,34 +130,30 @@ export function parseStoreyTable(
             column: column.header,
             message: 'A label can be at most 60 characters',
           });
-          ok = false;
         }
-        values.label = text;
+        values.label = text.slice(0, 60);
         continue;
       }
       const number = text === '' ? Number.NaN : Number(text.replace(/,/g, ''));
       if (text === '') {
         errors.push({ row: rowNumber, column: column.header, message: 'The cell is empty' });
-        ok = false;
       } else if (!Number.isFinite(number)) {
         errors.push({
           row: rowNumber,
           column: column.header,
           message: `"${text.slice(0, 40)}" is not a number`,
         });
-        ok = false;
       } else if (number <= 0) {
         errors.push({
           row: rowNumber,
           column: column.header,
           message: `${text} must be more than 0`,
         });
-        ok = false;
       } else {
         values[column.key] = number * column.toSi;
       }
     }
-    if (ok) storeys.push(values as ImportedStorey);
+    storeys.push(values);
   });
   if (storeys.length === 0 && errors.length === 0) {
     errors.push({
@@ -166,8 +162,7 @@ export function parseStoreyTable(
       message: 'The table has headers but no storeys',
     });
   }
-  const rowsRead = storeys.length + new Set(errors.map((e) => e.row)).size;
-  if (rowsRead > ANALYSIS_LIMITS.maxStoreys) {
+  if (storeys.length > ANALYSIS_LIMITS.maxStoreys) {
     errors.push({
       row: headerRow + 2 + ANALYSIS_LIMITS.maxStoreys,
       column: 'file',

@@ -1,5 +1,6 @@
 import AddIcon from '@mui/icons-material/Add';
 import ContentPasteIcon from '@mui/icons-material/ContentPaste';
+import UploadFileIcon from '@mui/icons-material/UploadFile';
 import CalculateIcon from '@mui/icons-material/Calculate';
 import DeleteIcon from '@mui/icons-material/Delete';
 import VerticalAlignBottomIcon from '@mui/icons-material/VerticalAlignBottom';
@@ -17,6 +18,7 @@ import {
 import { newRowId, storeyProblems, type StoreyRow } from '../model/storey-rows';
 import { ColumnStiffnessDialog } from './column-stiffness-dialog';
 import { PasteDialog } from './paste-dialog';
+import { UploadStoreysDialog } from './upload-storeys-dialog';
 
 interface StoreyTableProps {
   rows: StoreyRow[];
@@ -34,6 +36,7 @@ const toNumber = (value: unknown) =>
 /** The storey table: storey 1 (at the base) first; values shown in the chosen units. */
 export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyTableProps) {
   const [pasting, setPasting] = useState(false);
+  const [uploading, setUploading] = useState(false);
   const [columnsFor, setColumnsFor] = useState<number | null>(null);
   const problems = storeyProblems(rows);
   const invalid = new Set(problems.map((p) => `${p.rowId}:${p.field}`));
@@ -123,6 +126,9 @@ export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyT
           <Button startIcon={<ContentPasteIcon />} onClick={() => setPasting(true)}>
             Paste from a spreadsheet
           </Button>
+          <Button startIcon={<UploadFileIcon />} onClick={() => setUploading(true)}>
+            Upload a CSV or XLSX file
+          </Button>
         </Stack>
       )}
       <Box
@@ -171,6 +177,16 @@ export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyT
           onApply={(stiffness) => {
             onChange(rows.map((r, i) => (i === columnsFor ? { ...r, stiffness } : r)));
             setColumnsFor(null);
+          }}
+        />
+      )}
+      {uploading && (
+        <UploadStoreysDialog
+          units={units}
+          onClose={() => setUploading(false)}
+          onApply={(uploaded, mode) => {
+            onChange(mode === 'replace' ? uploaded : [...rows, ...uploaded]);
+            setUploading(false);
           }}
         />
       )}

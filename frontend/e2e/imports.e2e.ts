@@ -1,0 +1,64 @@
+import ExcelJS from 'exceljs';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
+
+/** An invented four-storey table as a designer keeps it, with one mistyped mass (row 3). */
+async function workbook(): Promise<Buffer> {
+  const book = new ExcelJS.Workbook();
+  const sheet = book.addWorksheet('Storeys');
+  [
+    ['Label', 'Height (m)', 'Mass (t)', 'Stiffness (kN/m)'],
+    ['Ground', 4.5, 510, 720000],
+    ['Level 2', 3.6, '48O', 650000],
+    ['Level 3', 3.6, 470, 580000],
+    ['Roof', 3.6, 360, 430000],
+  ].forEach((row) => sheet.addRow(row));
+  return Buffer.from(await book.xlsx.writeBuffer());
+}
+
+describe('Uploading a storey table (designer)', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(() => browser?.close());
+
+  it('uploads an XLSX table, sees the flagged cell, fixes it in the grid and analyses', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'designer');
+    await page.getByRole('navigation').getByRole('link', { name: 'Quick analysis' }).click();
+    await page.getByRole('button', { name: 'Upload a CSV or XLSX file' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Upload a storey table' });
+    await dialog.getByLabel('Storey table file').setInputFiles({
+      name: 'tower.xlsx',
+      mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+      buffer: await workbook(),
+    });
+    await dialog
+      .getByRole('alert', { name: 'Problems in the file' })
+      .getByText('Row 3, Mass (t): "48O" is not a number')
+      .waitFor();
+    await screenshot(page, 'imports-preview');
+    await dialog.getByRole('button', { name: 'Replace the table' }).click();
+    await dialog.waitFor({ state: 'detached' });
+
+    const grid = page.getByRole('grid', { name: 'Storey table' });
+    expect(await grid.getByRole('row').count()).toBe(5); // the header and four storeys
+    await page
+      .getByRole('alert', { name: 'Storey table problems' })
+      .getByText('Storey 2: mass must be a positive number')
+      .waitFor();
+    const cell = grid
+      .getByRole('row')
+      .filter({ hasText: 'Level 2' })
+      .locator('[data-field="mass"]');
+    await cell.dblclick();
+    await cell.locator('input').fill('480');
+    await cell.locator('input').press('Enter');
+    await page.getByRole('alert', { name: 'Storey table problems' }).waitFor({ state: 'detached' });
+    await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').nth(3).waitFor();
+    await screenshot(page, 'imports-fixed-and-analysed');
+    await close();
+  });
+});
