@@ -13,6 +13,7 @@ import { PoliciesGuard } from './authorization/policies.guard';
 import { loadEnvironment } from './config/environment';
 import { FRONTEND_DIST } from './config/paths';
 import { DatabaseModule } from './database/database.module';
+import { ExportsModule } from './exports/exports.module';
 import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
 import { MailModule } from './mail/mail.module';
@@ -36,6 +37,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     CalculationsModule,
     AnalysisModule,
     ImportsModule,
+    ExportsModule,
     VerificationModule,
     HealthModule,
     MailModule,

@@ -402,6 +402,47 @@ const MATRIX: Cell[] = [
     call: (c) => http().get('/api/imports/storeys/template.xlsx').set(as(c)),
   },
   {
+    route: 'GET /api/calculations/:id/results.csv',
+    allowed: everyone,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await locked()}/results.csv?table=modes`)
+        .set(as(c)),
+  },
+  {
+    route: 'GET /api/calculations/:id/results.xlsx',
+    allowed: everyone,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await locked()}/results.xlsx`)
+        .set(as(c)),
+  },
+  {
+    route: 'GET /api/calculations/:id/export.json',
+    allowed: staff,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await draft()}/export.json`)
+        .set(as(c)),
+  },
+  {
+    route: 'POST /api/projects/:id/calculations/import',
+    allowed: ['designer'],
+    ok: 201,
+    call: async (c) => {
+      const source = await http()
+        .get(`/api/calculations/${await draft()}/export.json`)
+        .set(as('designer'));
+      return http()
+        .post(`/api/projects/${await project()}/calculations/import`)
+        .set(as(c))
+        .send(source.body);
+    },
+  },
+  {
     route: 'GET /api/verification',
     allowed: everyone,
     ok: 200,

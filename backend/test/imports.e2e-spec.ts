@@ -1,6 +1,6 @@
 import JSZip from 'jszip';
 import type { StoreyImportResponse } from '@tiermode/shared-types';
-import { sampleInputs, useSignedInApp } from './support/fixtures';
+import { binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
 
 const { http, as } = useSignedInApp();
 
@@ -33,11 +33,7 @@ describe('POST /api/imports/storeys', () => {
       .get('/api/imports/storeys/template.xlsx?units=US')
       .set(as('designer'))
       .buffer(true)
-      .parse((res, done) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (c: Buffer) => chunks.push(c));
-        res.on('end', () => done(null, Buffer.concat(chunks)));
-      })
+      .parse(binaryBody)
       .expect(200);
     const res = await upload(template.body as Buffer, 'storeys.xlsx', 'US').expect(200);
     const [first] = (res.body as StoreyImportResponse).storeys;

@@ -166,3 +166,35 @@ export interface LibraryEntryDto {
   lockedAt: string;
   sealHash: string;
 }
+
+/**
+ * `GET /api/calculations/:id/export.json`: the whole calc as one document. Its `calculation`
+ * part, sent to `POST /api/projects/:id/calculations/import`, becomes a new draft with the same
+ * title, inputs and display units (the rest is kept for the record and ignored on import).
+ */
+export interface CalculationExport {
+  format: 'tiermode-calculation';
+  formatVersion: 1;
+  exportedAt: string;
+  calculation: {
+    title: string;
+    revision: number;
+    status: CalculationStatus;
+    projectName: string;
+    author: string;
+    reviewer: string | null;
+    displayUnits: DisplayUnits;
+    inputs: CalculationInputs;
+    analysis: AnalysisResponse | null;
+    engineVersion: string | null;
+    analysedAt: string | null;
+    seal: SealDto | null;
+    comments: {
+      author: string;
+      target: string | null;
+      body: string;
+      resolved: boolean;
+      createdAt: string;
+    }[];
+  };
+}

@@ -13,5 +13,6 @@ import { CalculationListsController, LibraryController } from './calculation-lis
   imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule, AuditModule, MailModule],
   controllers: [CalculationsController, CalculationListsController, LibraryController],
   providers: [CalculationsService, CalculationListsService],
+  exports: [CalculationsService],
 })
 export class CalculationsModule {}

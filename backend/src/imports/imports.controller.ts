@@ -3,7 +3,6 @@ import {
   Body,
   Controller,
   Get,
-  Header,
   HttpCode,
   Post,
   Query,
@@ -19,7 +18,7 @@ import {
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { readTable } from './read-table';
 import { parseStoreyTable } from './storey-table';
-import { storeyTemplateCsv, storeyTemplateXlsx } from './templates';
+import { storeyTemplateCsv, storeyTemplateXlsx, XLSX_TYPE } from './templates';
 import { uploadLimits } from './upload-limits.interceptor';
 
 const TABLE_LIMIT = 2 * 1024 * 1024;
@@ -62,20 +61,20 @@ export class ImportsController {
 
   @Get('template.csv')
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  @Header('Content-Type', 'text/csv; charset=utf-8')
   templateCsv(@Query('units') units?: string): StreamableFile {
     const chosen = unitsOf(units);
     return new StreamableFile(Buffer.from(storeyTemplateCsv(chosen), 'utf8'), {
+      type: 'text/csv; charset=utf-8',
       disposition: `attachment; filename="storey-table-template-${chosen}.csv"`,
     });
   }
 
   @Get('template.xlsx')
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  @Header('Content-Type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet')
   async templateXlsx(@Query('units') units?: string): Promise<StreamableFile> {
     const chosen = unitsOf(units);
     return new StreamableFile(await storeyTemplateXlsx(chosen), {
+      type: XLSX_TYPE,
       disposition: `attachment; filename="storey-table-template-${chosen}.xlsx"`,
     });
   }

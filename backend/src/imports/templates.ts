@@ -3,6 +3,8 @@ import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import { STOREY_COLUMNS, TEMPLATE_EXAMPLE } from './storey-table';
 
+export const XLSX_TYPE = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
+
 const rows = (units: DisplayUnits) => [
   STOREY_COLUMNS[units].map((c) => c.header),
   ...TEMPLATE_EXAMPLE[units],

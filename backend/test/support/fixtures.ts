@@ -24,6 +24,13 @@ export function sampleInputs(): CalculationInputs {
   };
 }
 
+/** A supertest parser that keeps a binary body (an XLSX or a PDF) as one Buffer. */
+export const binaryBody: Parameters<request.Test['parse']>[0] = (res, done) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (chunk: Buffer) => chunks.push(chunk));
+  res.on('end', () => done(null, Buffer.concat(chunks)));
+};
+
 /** Waits (up to 5 s) for a mail the local catcher received that `match` picks out. */
 export async function waitForMail(
   app: INestApplication<App>,
