@@ -62,3 +62,52 @@ describe('Uploading a storey table (designer)', () => {
     await close();
   });
 });
+
+describe('Downloads and a calc carried over as JSON (designer)', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(() => browser?.close());
+
+  it('downloads the results and the whole calc, and imports the calc as a new draft', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'designer');
+    await page
+      .getByRole('grid', { name: 'Recently locked' })
+      .getByRole('link', { name: /north-south/ })
+      .click();
+    await page.getByText('The seal is valid').waitFor();
+
+    const save = async (item: string) => {
+      await page.getByRole('button', { name: 'Download' }).click();
+      const [download] = await Promise.all([
+        page.waitForEvent('download'),
+        page.getByRole('menuitem', { name: item }).click(),
+      ]);
+      const stream = await download.createReadStream();
+      const chunks: Buffer[] = [];
+      for await (const chunk of stream) chunks.push(chunk as Buffer);
+      return { name: download.suggestedFilename(), bytes: Buffer.concat(chunks) };
+    };
+    const xlsx = await save('Results (XLSX)');
+    expect(xlsx.name).toMatch(/-rev1-results\.xlsx$/);
+    expect(xlsx.bytes.subarray(0, 2).toString()).toBe('PK');
+    const json = await save('Whole calc (JSON)');
+    const document = JSON.parse(json.bytes.toString('utf8')) as {
+      calculation: { inputs: { storeys: unknown[] } };
+    };
+    expect(document.calculation.inputs.storeys).toHaveLength(7);
+
+    await page.getByRole('link', { name: 'Alder Court housing block' }).click();
+    await page.getByLabel('Calc file (JSON)').setInputFiles({
+      name: json.name,
+      mimeType: 'application/json',
+      buffer: json.bytes,
+    });
+    await page.getByText('Draft', { exact: true }).first().waitFor();
+    expect(await page.getByRole('grid', { name: 'Storey table' }).getByRole('row').count()).toBe(8);
+    await screenshot(page, 'imports-json-draft');
+    await close();
+  });
+});

@@ -19,6 +19,7 @@ import {
   useSaveCalculation,
 } from '@/features/calculations/api/calculations';
 import { CommentThread } from '@/features/calculations/components/comment-thread';
+import { DownloadsMenu } from '@/features/calculations/components/downloads-menu';
 import { HistoryPanel } from '@/features/calculations/components/history-panel';
 import { PreliminaryWatermark } from '@/features/calculations/components/preliminary-watermark';
 import { ReviewActions } from '@/features/calculations/components/review-actions';
@@ -106,7 +107,10 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
             </Typography>
           </Stack>
         </Stack>
-        <UnitsToggle units={units} onChange={setUnits} />
+        <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
+          <DownloadsMenu calc={calc} />
+          <UnitsToggle units={units} onChange={setUnits} />
+        </Stack>
       </Stack>
       <CautionBanner />
       {!ofRecord && (

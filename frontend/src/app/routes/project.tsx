@@ -5,6 +5,7 @@ import { useNavigate, useParams } from 'react-router';
 import { RequestFailed } from '@/components/errors/request-failed';
 import { STARTING_INPUTS } from '@/features/analysis/model/starting-inputs';
 import { CalculationList } from '@/features/calculations/components/calculation-list';
+import { ImportCalculationButton } from '@/features/calculations/components/import-calculation-button';
 import { NewCalculationDialog } from '@/features/calculations/components/new-calculation-dialog';
 import { useProject } from '@/features/projects/api/projects';
 import { ProjectDetails } from '@/features/projects/components/project-details';
@@ -29,9 +30,15 @@ export function ProjectRoute() {
       <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'center' }}>
         <Typography variant="h2">Calculations</Typography>
         {canCreate && (
-          <Button variant="contained" startIcon={<AddIcon />} onClick={() => setCreating(true)}>
-            New calculation
-          </Button>
+          <Stack direction="row" spacing={1} sx={{ alignItems: 'flex-start' }}>
+            <ImportCalculationButton
+              projectId={id}
+              onImported={(calc) => void navigate(`/calculations/${calc.id}`)}
+            />
+            <Button variant="contained" startIcon={<AddIcon />} onClick={() => setCreating(true)}>
+              New calculation
+            </Button>
+          </Stack>
         )}
       </Stack>
       <CalculationList

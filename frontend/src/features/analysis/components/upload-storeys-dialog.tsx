@@ -18,7 +18,8 @@ import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { DisplayUnits, ImportedStorey } from '@tiermode/shared-types';
 import { useState } from 'react';
 import { useDropzone } from 'react-dropzone';
-import { api, errorMessages } from '@/lib/api-client';
+import { errorMessages } from '@/lib/api-client';
+import { downloadFile } from '@/lib/download';
 import { massHeader, toDisplay, unitLabel, type Quantity } from '@/lib/units';
 import { templateUrl, useImportStoreys } from '../api/import-storeys';
 import { newRowId, type StoreyRow } from '../model/storey-rows';
@@ -28,16 +29,8 @@ const ACCEPT = {
   'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet': ['.xlsx'],
 };
 
-/** Downloads a template through the API client, which carries the sign-in token. */
-async function download(format: 'csv' | 'xlsx', units: DisplayUnits) {
-  const { data } = await api.get<Blob>(templateUrl(format, units), { responseType: 'blob' });
-  const url = URL.createObjectURL(data);
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = `storey-table-template-${units}.${format}`;
-  a.click();
-  URL.revokeObjectURL(url);
-}
+const download = (format: 'csv' | 'xlsx', units: DisplayUnits) =>
+  downloadFile(templateUrl(format, units), `storey-table-template-${units}.${format}`);
 
 type PreviewRow = ImportedStorey & { id: number; problems: string };
 

@@ -72,6 +72,16 @@ export function useCreateCalculation(projectId: string) {
   });
 }
 
+/** A document from "Whole calc (JSON)" becomes a new draft in the project. */
+export function useImportCalculation(projectId: string) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (document: unknown) =>
+      (await api.post<CalculationDto>(`/projects/${projectId}/calculations/import`, document)).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
 export function useSaveCalculation(id: string) {
   const refresh = useRefresh();
   return useMutation({

@@ -1,0 +1,72 @@
+import DownloadIcon from '@mui/icons-material/Download';
+import { Alert, Button, Menu, MenuItem, Snackbar } from '@mui/material';
+import type { CalculationDto } from '@tiermode/shared-types';
+import { useState } from 'react';
+import { errorMessages } from '@/lib/api-client';
+import { downloadFile } from '@/lib/download';
+
+const base = (calc: CalculationDto) =>
+  `${calc.title.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'calculation'}-rev${calc.revision}`;
+
+/** The calc's results as spreadsheets, and the whole calc as JSON. */
+export function DownloadsMenu({ calc }: { calc: CalculationDto }) {
+  const [anchor, setAnchor] = useState<HTMLElement | null>(null);
+  const [failure, setFailure] = useState<string | null>(null);
+  const analysed = calc.analysis !== null;
+  const items: { label: string; path: string; file: string; needsResults: boolean }[] = [
+    { label: 'Results (XLSX)', path: 'results.xlsx', file: 'results.xlsx', needsResults: true },
+    {
+      label: 'Modes (CSV)',
+      path: 'results.csv?table=modes',
+      file: 'modes.csv',
+      needsResults: true,
+    },
+    {
+      label: 'Modal responses (CSV)',
+      path: 'results.csv?table=modal',
+      file: 'modal.csv',
+      needsResults: true,
+    },
+    {
+      label: 'Combined responses (CSV)',
+      path: 'results.csv?table=combined',
+      file: 'combined.csv',
+      needsResults: true,
+    },
+    { label: 'Whole calc (JSON)', path: 'export.json', file: 'calc.json', needsResults: false },
+  ];
+  return (
+    <>
+      <Button
+        startIcon={<DownloadIcon />}
+        variant="outlined"
+        aria-haspopup="menu"
+        onClick={(e) => setAnchor(e.currentTarget)}
+      >
+        Download
+      </Button>
+      <Menu open={anchor !== null} anchorEl={anchor} onClose={() => setAnchor(null)}>
+        {items.map((item) => (
+          <MenuItem
+            key={item.label}
+            disabled={item.needsResults && !analysed}
+            onClick={() => {
+              setAnchor(null);
+              downloadFile(
+                `/calculations/${calc.id}/${item.path}`,
+                `${base(calc)}-${item.file}`,
+              ).catch((error: unknown) => setFailure(errorMessages(error).join(' ')));
+            }}
+          >
+            {item.label}
+          </MenuItem>
+        ))}
+      </Menu>
+      <Snackbar open={failure !== null} autoHideDuration={8000} onClose={() => setFailure(null)}>
+        <Alert severity="error" onClose={() => setFailure(null)}>
+          {failure}
+        </Alert>
+      </Snackbar>
+    </>
+  );
+}
