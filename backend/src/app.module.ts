@@ -18,6 +18,7 @@ import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
 import { MailModule } from './mail/mail.module';
 import { ProjectsModule } from './projects/projects.module';
+import { ReportsModule } from './reports/reports.module';
 import { UsersModule } from './users/users.module';
 import { VerificationModule } from './verification/verification.module';
 
@@ -38,6 +39,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     AnalysisModule,
     ImportsModule,
     ExportsModule,
+    ReportsModule,
     VerificationModule,
     HealthModule,
     MailModule,

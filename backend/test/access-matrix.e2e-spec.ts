@@ -443,6 +443,15 @@ const MATRIX: Cell[] = [
     },
   },
   {
+    route: 'GET /api/calculations/:id/report.pdf',
+    allowed: everyone,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await locked()}/report.pdf`)
+        .set(as(c)),
+  },
+  {
     route: 'GET /api/verification',
     allowed: everyone,
     ok: 200,

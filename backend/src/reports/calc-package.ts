@@ -1,0 +1,346 @@
+import type { CalculationDto, CombinedResponse, SealCheckResponse } from '@tiermode/shared-types';
+import { formats as f, isoDate } from './formats';
+import { lineChart } from './pdf-chart';
+import { finish, heading, MARGIN, newDocument, write, type Doc } from './pdf-kit';
+import { table } from './pdf-table';
+
+const CAUTION =
+  'This analysis is an aid to an engineer’s judgement. The locally adopted building code governs, ' +
+  'and nothing here is for construction until the engineer of record has accepted it.';
+
+const STATUS = {
+  draft: 'Draft (preliminary)',
+  submitted: 'Submitted for review (preliminary)',
+  locked: 'Locked: calc of record',
+  superseded: 'Superseded by a newer revision',
+} as const;
+
+function keyValues(doc: Doc, pairs: [string, string][]): void {
+  for (const [key, value] of pairs) {
+    const y = doc.y;
+    doc.font('bold').text(key, MARGIN, y, { width: 125 });
+    const afterKey = doc.y;
+    doc.x = MARGIN + 130;
+    doc.y = y;
+    write(doc, value || '-', { width: 365 });
+    doc.x = MARGIN;
+    doc.y = Math.max(afterKey, doc.y) + 2;
+  }
+}
+
+function cover(doc: Doc, calc: CalculationDto, check: SealCheckResponse | null, at: Date) {
+  doc.fontSize(20);
+  write(doc, calc.title, { bold: true });
+  doc.fontSize(11).moveDown(0.3);
+  write(doc, `Seismic modal response spectrum analysis: calc package, revision ${calc.revision}`);
+  doc.fontSize(10).moveDown(1);
+  keyValues(doc, [
+    ['Project', calc.projectName],
+    ['Revision', String(calc.revision)],
+    ['Status', STATUS[calc.status]],
+    ['Author', calc.author.name],
+    ['Reviewer', calc.reviewer?.name ?? '-'],
+    ['Analysed', `${isoDate(calc.analysedAt)}, engine ${calc.engineVersion ?? '-'}`],
+    ['Submitted', isoDate(calc.submittedAt)],
+    ['Locked', isoDate(calc.lockedAt)],
+    ['Generated', isoDate(at.toISOString())],
+  ]);
+  doc.moveDown(0.5);
+  if (calc.seal) {
+    keyValues(doc, [['Seal (SHA-256)', calc.seal.hash]]);
+    write(
+      doc,
+      check?.valid
+        ? 'Verification: the hash recomputed from the stored data when this package was made matches the seal. ' +
+            'To verify a copy, open the calc in the product and check that its seal panel shows the same hash, valid.'
+        : 'WARNING: the stored data no longer matches the seal; this calc was changed outside the application. Do not rely on it.',
+      { width: 495 },
+    );
+  } else {
+    write(doc, 'Not locked: there is no seal. Every page is marked PRELIMINARY.', { width: 495 });
+  }
+  heading(doc, 'Cautions');
+  write(doc, CAUTION, { width: 495 });
+  doc.moveDown(0.3);
+  write(
+    doc,
+    'The model is a planar shear building: rigid floors, one horizontal direction, linear elastic, fixed base, ' +
+      'one damping ratio for every mode. The engineer of record confirms that it represents the structure.',
+    { width: 495 },
+  );
+}
+
+function inputs(doc: Doc, calc: CalculationDto) {
+  const { storeys, spectrum, dampingRatio, modeCount } = calc.inputs;
+  heading(doc, 'Inputs: storey table');
+  table(
+    doc,
+    [
+      { header: 'Storey', width: 50, align: 'right' },
+      { header: 'Label', width: 130 },
+      { header: 'Height (m)', width: 90, align: 'right' },
+      { header: 'Mass (t)', width: 100, align: 'right' },
+      { header: 'Stiffness (kN/m)', width: 125, align: 'right' },
+    ],
+    storeys.map((s, i) => [
+      String(i + 1),
+      s.label ?? '',
+      f.m(s.height),
+      f.t(s.mass),
+      f.kNperM(s.stiffness),
+    ]),
+  );
+  write(
+    doc,
+    `Storey 1 is at the base. Damping: ${(dampingRatio * 100).toFixed(2)}% of critical in every mode. ` +
+      `Modes combined: ${modeCount ? `the first ${modeCount}` : 'all'}. Spectrum interpolation: ${spectrum.interpolation ?? 'linear'}.`,
+    { width: 495 },
+  );
+  heading(doc, 'Inputs: design spectrum');
+  table(
+    doc,
+    [
+      { header: 'Point', width: 60, align: 'right' },
+      { header: 'Period T (s)', width: 120, align: 'right' },
+      { header: 'Sa (g)', width: 120, align: 'right' },
+    ],
+    spectrum.points.map((p, i) => [String(i + 1), p.period.toFixed(3), f.g(p.sa)]),
+  );
+  lineChart(doc, {
+    title: 'Design spectrum, with the modal periods',
+    xLabel: 'Period T (s)',
+    yLabel: 'Sa (g)',
+    width: 495,
+    height: 230,
+    series: [
+      { label: 'Design spectrum', points: spectrum.points.map((p) => [p.period, p.sa]) },
+      {
+        label: 'Modal periods',
+        points: (calc.analysis?.modes ?? []).map((m) => [m.period, m.sa]),
+        pointsOnly: true,
+      },
+    ],
+  });
+}
+
+function method(doc: Doc) {
+  heading(doc, 'Method');
+  for (const line of [
+    'Mass matrix M = diag(m₁ … mₙ); stiffness matrix K of the shear building, tridiagonal from the storey stiffnesses kᵢ.',
+    'Modes: K φ = ω² M φ, solved through the symmetric form A = M^-1/2 K M^-1/2; T = 2π / ω.',
+    'Participation: Lₙ = φₙᵀ M r, Mₙ = φₙᵀ M φₙ, Γₙ = Lₙ / Mₙ, effective modal mass Mₙ* = Lₙ² / Mₙ (r = 1 at every floor).',
+    'Modal maxima for Aₙ = Sa(Tₙ) g: floor forces fₙ = Γₙ M φₙ Aₙ, displacements uₙ = Γₙ φₙ Aₙ / ωₙ², drifts, storey shears, overturning moments.',
+    'Combination, each quantity on its own: SRSS r = √(Σ rₙ²); CQC r = √(Σᵢ Σⱼ ρᵢⱼ rᵢ rⱼ) with the Der Kiureghian (1981) coefficient ρᵢⱼ for equal damping ζ; ABS Σ |rₙ| for comparison.',
+    'Sources: Chopra, Dynamics of Structures, chapters 10-13; Wilson, Der Kiureghian & Bayo (1981).',
+  ]) {
+    write(doc, `• ${line.replace(/[₁ₙᵢⱼᵀ²√Σ…]/g, (c) => SUBSTITUTES[c] ?? c)}`, { width: 495 });
+    doc.moveDown(0.2);
+  }
+}
+
+// Roboto's Latin and Greek subsets lack sub- and superscripts and some maths signs.
+const SUBSTITUTES: Record<string, string> = {
+  '₁': '1',
+  ₙ: 'n',
+  ᵢ: 'i',
+  ⱼ: 'j',
+  ᵀ: '^T',
+  '²': '^2',
+  '√': 'sqrt',
+  Σ: 'Σ',
+  '…': '...',
+};
+
+function results(doc: Doc, calc: CalculationDto) {
+  const analysis = calc.analysis;
+  heading(doc, 'Modes and participation');
+  if (!analysis) {
+    write(doc, 'Not analysed.');
+    return;
+  }
+  table(
+    doc,
+    [
+      { header: 'Mode', width: 40, align: 'right' },
+      { header: 'Period (s)', width: 70, align: 'right' },
+      { header: 'Freq. (Hz)', width: 65, align: 'right' },
+      { header: 'Part. factor', width: 75, align: 'right' },
+      { header: 'M* (t)', width: 80, align: 'right' },
+      { header: 'M*/M (%)', width: 60, align: 'right' },
+      { header: 'Cumul. (%)', width: 60, align: 'right' },
+      { header: 'Sa (g)', width: 45, align: 'right' },
+    ],
+    analysis.modes.map((m) => [
+      String(m.number),
+      f.period(m.period),
+      f.plain(m.frequency),
+      f.plain(m.participationFactor),
+      f.t(m.effectiveMass),
+      f.percent(m.effectiveMassRatio),
+      f.percent(m.cumulativeMassRatio),
+      f.g(m.sa),
+    ]),
+  );
+  for (const w of analysis.warnings) write(doc, `Warning: ${w}`, { width: 495 });
+  let height = 0;
+  const elevations = calc.inputs.storeys.map((s) => (height += s.height));
+  lineChart(doc, {
+    title: 'Mode shapes (roof = 1), first three modes',
+    xLabel: 'Mode shape',
+    yLabel: 'Elevation (m)',
+    width: 495,
+    height: 260,
+    series: analysis.modes.slice(0, 3).map((m, i) => ({
+      label: `Mode ${m.number} (T = ${f.period(m.period)} s)`,
+      points: [[0, 0], ...m.shape.map((p, k) => [p, elevations[k]] as [number, number])],
+      markers: true,
+      dash: i === 0 ? undefined : i * 2,
+    })),
+  });
+  const profile = (
+    title: string,
+    xLabel: string,
+    pick: (c: CombinedResponse) => number[],
+    scale: number,
+  ) =>
+    lineChart(doc, {
+      title,
+      xLabel,
+      yLabel: 'Elevation (m)',
+      width: 495,
+      height: 250,
+      series: (['srss', 'cqc', 'abs'] as const).map((method, i) => ({
+        label: method === 'abs' ? 'ABS (upper bound)' : method.toUpperCase(),
+        points: pick(analysis.combined[method]).map(
+          (v, k) => [v * scale, elevations[k]] as [number, number],
+        ),
+        steps: true,
+        dash: i === 0 ? undefined : i * 2,
+      })),
+    });
+  if (doc.y > 420) doc.addPage();
+  profile('Storey shear', 'Storey shear (kN)', (c) => c.storeyShear, 1e-3);
+  if (doc.y > 420) doc.addPage();
+  profile('Storey drift ratio', 'Drift ratio', (c) => c.driftRatio, 1);
+
+  heading(doc, 'Combined responses (CQC)');
+  const cqc = analysis.combined.cqc;
+  table(
+    doc,
+    [
+      { header: 'Storey', width: 45, align: 'right' },
+      { header: 'Label', width: 80 },
+      { header: 'Displ. (mm)', width: 70, align: 'right' },
+      { header: 'Drift ratio', width: 70, align: 'right' },
+      { header: 'Floor force (kN)', width: 75, align: 'right' },
+      { header: 'Shear (kN)', width: 75, align: 'right' },
+      { header: 'Moment (kN·m)', width: 80, align: 'right' },
+    ],
+    cqc.displacement.map((u, i) => [
+      String(i + 1),
+      calc.inputs.storeys[i]?.label ?? '',
+      f.mm(u),
+      f.ratio(cqc.driftRatio[i]),
+      f.kN(cqc.floorForce[i]),
+      f.kN(cqc.storeyShear[i]),
+      f.kNm(cqc.overturningMoment[i]),
+    ]),
+  );
+  heading(doc, 'Base shear and base moment');
+  table(
+    doc,
+    [
+      { header: 'Combination', width: 160 },
+      { header: 'Base shear (kN)', width: 150, align: 'right' },
+      { header: 'Base moment (kN·m)', width: 150, align: 'right' },
+    ],
+    (['srss', 'cqc', 'abs'] as const).map((method) => [
+      method === 'abs' ? 'ABS (upper bound)' : method.toUpperCase(),
+      f.kN(analysis.combined[method].baseShear),
+      f.kNm(analysis.combined[method].baseMoment),
+    ]),
+  );
+}
+
+function review(doc: Doc, calc: CalculationDto) {
+  heading(doc, 'Code-basis checks');
+  write(
+    doc,
+    'No code-basis checks are part of this version of the calc; the engineer of record makes them.',
+    { width: 495 },
+  );
+  heading(doc, 'Review comments');
+  if (calc.comments.length === 0) write(doc, 'None.');
+  for (const c of calc.comments) {
+    write(
+      doc,
+      `${c.author.name}, ${isoDate(c.createdAt)}, on ${c.target ?? 'the whole calc'}${c.resolved ? ' (resolved)' : ''}:`,
+      { bold: true, width: 495 },
+    );
+    write(doc, c.body, { width: 495 });
+    doc.moveDown(0.3);
+  }
+  heading(doc, 'Sign-off');
+  if (calc.seal) {
+    keyValues(doc, [
+      ['Accepted by', calc.seal.reviewerName],
+      ['Licence', `${calc.seal.licenseNumber}, ${calc.seal.licenseJurisdiction}`],
+      ['Locked', isoDate(calc.seal.lockedAt)],
+      ['Statement', calc.seal.statement],
+      ['Seal (SHA-256)', calc.seal.hash],
+    ]);
+  } else {
+    write(doc, 'Not signed off: this calc is preliminary until a licensed reviewer locks it.', {
+      width: 495,
+    });
+  }
+}
+
+/** Page numbers on every page, and PRELIMINARY across each page of a calc that is not locked. */
+function decorate(doc: Doc, calc: CalculationDto) {
+  const range = doc.bufferedPageRange();
+  const preliminary = calc.status !== 'locked' && calc.status !== 'superseded';
+  for (let i = range.start; i < range.start + range.count; i += 1) {
+    doc.switchToPage(i);
+    const { width, height } = doc.page;
+    if (preliminary) {
+      doc.save();
+      doc.rotate(-35, { origin: [width / 2, height / 2] });
+      doc.font('bold').fontSize(72).fillColor('#c62828').fillOpacity(0.12);
+      doc.text('PRELIMINARY', 0, height / 2 - 36, { width, align: 'center', lineBreak: false });
+      doc.restore();
+    }
+    doc.font('text').fontSize(8).fillColor('#444444').fillOpacity(1);
+    const bottom = doc.page.margins.bottom;
+    doc.page.margins.bottom = 0;
+    doc.text(
+      `${calc.title}, revision ${calc.revision} · ${STATUS[calc.status]} · page ${i + 1} of ${range.count}`,
+      MARGIN,
+      height - 30,
+      { width: width - 2 * MARGIN, align: 'center', lineBreak: false },
+    );
+    doc.page.margins.bottom = bottom;
+  }
+}
+
+/**
+ * The calc package: cover, cautions, inputs, method, modes, figures, combined results, checks,
+ * review comments and sign-off, as a PDF. A locked calc's package is made from its stored,
+ * sealed data, and the cover says whether that data still matches the seal.
+ */
+export async function buildCalcPackage(
+  calc: CalculationDto,
+  check: SealCheckResponse | null,
+  generatedAt: Date,
+): Promise<Buffer> {
+  const doc = newDocument(`${calc.title}, revision ${calc.revision}`);
+  cover(doc, calc, check, generatedAt);
+  doc.addPage();
+  inputs(doc, calc);
+  method(doc);
+  doc.addPage();
+  results(doc, calc);
+  review(doc, calc);
+  decorate(doc, calc);
+  return finish(doc);
+}

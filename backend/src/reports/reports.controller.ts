@@ -1,0 +1,29 @@
+import { Controller, Get, Param, StreamableFile } from '@nestjs/common';
+import type { AppAbility } from '../authorization/app-ability';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { CurrentAbility } from '../authorization/current.decorators';
+import { CalculationsService } from '../calculations/calculations.service';
+import { UuidParam } from '../common/pipes/uuid-param.pipe';
+import { buildCalcPackage } from './calc-package';
+
+@Controller('calculations')
+export class ReportsController {
+  constructor(private readonly calculations: CalculationsService) {}
+
+  /** The calc package as a PDF; a locked calc's comes from its sealed data, checked first. */
+  @Get(':id/report.pdf')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  async report(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<StreamableFile> {
+    const calc = await this.calculations.get(ability, id);
+    const check = calc.seal ? await this.calculations.checkSeal(ability, id) : null;
+    const pdf = await buildCalcPackage(calc, check, new Date());
+    const name = calc.title.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'calculation';
+    return new StreamableFile(pdf, {
+      type: 'application/pdf',
+      disposition: `attachment; filename="${name}-rev${calc.revision}-calc-package.pdf"`,
+    });
+  }
+}

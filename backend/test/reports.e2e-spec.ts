@@ -1,0 +1,66 @@
+import type { CalculationDto } from '@tiermode/shared-types';
+import { formats } from '../src/reports/formats';
+import { binaryBody, useSignedInApp } from './support/fixtures';
+import { pdfText } from './support/pdf-text';
+
+const { http, as } = useSignedInApp();
+
+async function packageOf(id: string, role: 'designer' | 'student' = 'designer') {
+  const res = await http()
+    .get(`/api/calculations/${id}/report.pdf`)
+    .set(as(role))
+    .buffer(true)
+    .parse(binaryBody)
+    .expect(200)
+    .expect('Content-Type', 'application/pdf');
+  return res.body as Buffer;
+}
+
+describe('GET /api/calculations/:id/report.pdf', () => {
+  let locked: CalculationDto;
+  let submitted: CalculationDto;
+
+  beforeAll(async () => {
+    const list = await http().get('/api/calculations').set(as('designer')).expect(200);
+    const find = async (status: string) =>
+      (
+        await http()
+          .get(
+            `/api/calculations/${(list.body as { id: string; status: string }[]).find((c) => c.status === status)!.id}`,
+          )
+          .set(as('designer'))
+      ).body as CalculationDto;
+    locked = await find('locked');
+    submitted = await find('submitted');
+  });
+
+  it('is a PDF whose text has the title, revision, periods and combined base shear as shown', async () => {
+    const bytes = await packageOf(locked.id);
+    expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    const { text, pages } = await pdfText(bytes);
+    expect(pages).toBeGreaterThan(3);
+    expect(text).toContain(locked.title);
+    expect(text).toContain(`revision ${locked.revision}`);
+    for (const mode of locked.analysis!.modes) expect(text).toContain(formats.period(mode.period));
+    expect(text).toContain(formats.kN(locked.analysis!.combined.cqc.baseShear));
+    expect(text).toContain(formats.kN(locked.analysis!.combined.srss.baseShear));
+    expect(text).toMatch(new RegExp(`page 1 of ${pages}`));
+  });
+
+  it('carries the seal hash of a locked calc, and no PRELIMINARY mark', async () => {
+    const { text } = await pdfText(await packageOf(locked.id, 'student'));
+    expect(text).toContain(locked.seal!.hash);
+    expect(text).toContain('matches the seal');
+    expect(text).not.toContain('PRELIMINARY');
+  });
+
+  it('marks every page of a calc that is not locked PRELIMINARY, and has no seal', async () => {
+    const { text, pages } = await pdfText(await packageOf(submitted.id));
+    expect(text.match(/PRELIMINARY/g)?.length).toBeGreaterThanOrEqual(pages);
+    expect(text).toContain('Not locked: there is no seal');
+  });
+
+  it('is refused to a student for a calc that is not locked', async () => {
+    await http().get(`/api/calculations/${submitted.id}/report.pdf`).set(as('student')).expect(403);
+  });
+});
