@@ -8,22 +8,32 @@ import { join } from 'node:path';
 import { ensureInstalled, npm } from './lib.mjs';
 
 const CHROMIUM = '/usr/bin/chromium';
+// The browser journeys need Debian's chromium, and pdftoppm (poppler-utils) to render the first
+// page of a calc package to an image.
+const TOOLS = [
+  { path: CHROMIUM, pkg: 'chromium' },
+  { path: '/usr/bin/pdftoppm', pkg: 'poppler-utils' },
+];
 const reports = mkdtempSync(join(tmpdir(), 'tiermode-test-'));
 
-async function ensureChromium() {
-  if (existsSync(CHROMIUM)) return true;
+async function ensureBrowserTools() {
+  const missing = TOOLS.filter((t) => !existsSync(t.path));
+  if (missing.length === 0) return true;
+  const packages = missing.map((t) => t.pkg);
   if (process.getuid?.() !== 0) {
-    console.error(`${CHROMIUM} is missing; install Debian's chromium (apt-get install chromium).`);
+    console.error(
+      `Missing ${missing.map((t) => t.path).join(', ')}: apt-get install ${packages.join(' ')}`,
+    );
     return false;
   }
-  console.log("Installing Debian's chromium for the browser journeys…");
+  console.log(`Installing Debian's ${packages.join(' and ')} for the browser journeys…`);
   try {
     const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
     execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env });
-    execFileSync('apt-get', ['install', '-y', '-qq', 'chromium'], { stdio: 'inherit', env });
-    return existsSync(CHROMIUM);
+    execFileSync('apt-get', ['install', '-y', '-qq', ...packages], { stdio: 'inherit', env });
+    return TOOLS.every((t) => existsSync(t.path));
   } catch (error) {
-    console.error(`apt-get could not install chromium: ${error.message}`);
+    console.error(`apt-get could not install ${packages.join(' ')}: ${error.message}`);
     return false;
   }
 }
@@ -63,7 +73,7 @@ const vitestReport = (name) => [
 ];
 
 await ensureInstalled();
-const haveChromium = await ensureChromium();
+const haveBrowserTools = await ensureBrowserTools();
 
 await step('Build shared-types', ['run', 'build', '-w', 'shared-types']);
 await step('Lint', ['run', 'lint']);
@@ -84,7 +94,7 @@ await step(
   join(reports, 'frontend-unit.json'),
 );
 const built = await step('Build backend and frontend', ['run', 'build']);
-if (built && haveChromium) {
+if (built && haveBrowserTools) {
   await step(
     'Browser journeys',
     ['run', 'test:e2e', '-w', 'frontend', '--', ...vitestReport('journeys')],
@@ -93,7 +103,7 @@ if (built && haveChromium) {
 } else {
   results.push({ name: 'Browser journeys', ok: false, code: null, tally: null });
   console.error(
-    `\nBrowser journeys not run: ${built ? 'chromium is missing' : 'the build failed'}.`,
+    `\nBrowser journeys not run: ${built ? 'chromium or pdftoppm is missing' : 'the build failed'}.`,
   );
 }
 

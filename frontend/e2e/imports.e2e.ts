@@ -1,7 +1,10 @@
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import ExcelJS from 'exceljs';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
+import { launchBrowser, newPage, screenshot, SCREENSHOTS, signIn } from './support/browser';
 
 /** An invented four-storey table as a designer keeps it, with one mistyped mass (row 3). */
 async function workbook(): Promise<Buffer> {
@@ -93,6 +96,26 @@ describe('Downloads and a calc carried over as JSON (designer)', () => {
     const xlsx = await save('Results (XLSX)');
     expect(xlsx.name).toMatch(/-rev1-results\.xlsx$/);
     expect(xlsx.bytes.subarray(0, 2).toString()).toBe('PK');
+    const pdf = await save('Calc package (PDF)');
+    expect(pdf.name).toMatch(/-rev1-calc-package\.pdf$/);
+    expect(pdf.bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    // The first page, rendered as the reader will see it, kept with the screenshots.
+    mkdirSync(SCREENSHOTS, { recursive: true });
+    const file = join(SCREENSHOTS, 'calc-package.pdf');
+    writeFileSync(file, pdf.bytes);
+    execFileSync('pdftoppm', [
+      '-png',
+      '-r',
+      '80',
+      '-f',
+      '1',
+      '-l',
+      '1',
+      '-singlefile',
+      file,
+      join(SCREENSHOTS, 'calc-package-page-1'),
+    ]);
+    expect(existsSync(join(SCREENSHOTS, 'calc-package-page-1.png'))).toBe(true);
     const json = await save('Whole calc (JSON)');
     const document = JSON.parse(json.bytes.toString('utf8')) as {
       calculation: { inputs: { storeys: unknown[] } };

@@ -14,6 +14,12 @@ export function DownloadsMenu({ calc }: { calc: CalculationDto }) {
   const [failure, setFailure] = useState<string | null>(null);
   const analysed = calc.analysis !== null;
   const items: { label: string; path: string; file: string; needsResults: boolean }[] = [
+    {
+      label: 'Calc package (PDF)',
+      path: 'report.pdf',
+      file: 'calc-package.pdf',
+      needsResults: false,
+    },
     { label: 'Results (XLSX)', path: 'results.xlsx', file: 'results.xlsx', needsResults: true },
     {
       label: 'Modes (CSV)',
