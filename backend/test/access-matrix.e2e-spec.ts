@@ -390,6 +390,16 @@ const MATRIX: Cell[] = [
         ),
   },
   {
+    route: 'POST /api/imports/spectrum',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/imports/spectrum')
+        .set(as(c))
+        .attach('file', Buffer.from('Period (s),Sa (g)\n0,0.4\n1,1\n'), 'spectrum.csv'),
+  },
+  {
     route: 'GET /api/imports/storeys/template.csv',
     allowed: everyone,
     ok: 200,

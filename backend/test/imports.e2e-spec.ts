@@ -168,3 +168,42 @@ describe('POST /api/imports/storeys', () => {
     expect(after.body.version).toBe(calc.body.version);
   });
 });
+
+describe('POST /api/imports/spectrum', () => {
+  const send = (csv: string) =>
+    http()
+      .post('/api/imports/spectrum')
+      .set(as('designer'))
+      .attach('file', Buffer.from(csv), 'spectrum.csv');
+
+  it('reads period and Sa points', async () => {
+    const res = await send('Period (s),Sa (g)\n0,0.4\n0.15,1\n0.6,1\n4,0.15\n').expect(200);
+    expect(res.body).toEqual({
+      points: [
+        { period: 0, sa: 0.4 },
+        { period: 0.15, sa: 1 },
+        { period: 0.6, sa: 1 },
+        { period: 4, sa: 0.15 },
+      ],
+      errors: [],
+    });
+  });
+
+  it.each([
+    ['Period (s),Sa (g)\n0,0.4\n0.5,x\n', 'Row 3, Sa (g): "x" is not a number'],
+    ['Period (s),Sa (g)\n0,0.4\n-1,0.5\n', 'Row 3, Period (s): -1 must be 0 or more'],
+    [
+      'Period (s),Sa (g)\n0,0.4\n0.5,1\n0.5,0.9\n',
+      'Row 4, Period (s): 0.5 s must be more than the period above it (0.5 s)',
+    ],
+    ['Period (s),Sa (g)\n0,0.4\n', 'Row 2, file: A spectrum needs at least two points'],
+    ['Period (s),Acceleration\n0,0.4\n', 'Row 1, Sa (g): The column "Sa (g)" is missing'],
+    [
+      'Period (ms),Sa (g)\n0,0.4\n1,1\n',
+      'Row 1, Period (s): The column "Period (ms)" must be in s',
+    ],
+  ])('names the row and column of %j', async (csv, message) => {
+    const res = await send(csv).expect(400);
+    expect(messages(res.body)).toContain(message);
+  });
+});

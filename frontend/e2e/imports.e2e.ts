@@ -62,6 +62,16 @@ describe('Uploading a storey table (designer)', () => {
     await page.getByRole('alert', { name: 'Storey table problems' }).waitFor({ state: 'detached' });
     await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').nth(3).waitFor();
     await screenshot(page, 'imports-fixed-and-analysed');
+
+    // A spectrum kept as a CSV of period and Sa (invented values) replaces the points.
+    await page.getByLabel('Spectrum file').setInputFiles({
+      name: 'spectrum.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from('Period (s),Sa (g)\n0,0.3\n0.2,0.9\n0.8,0.9\n5,0.1\n'),
+    });
+    await expect
+      .poll(() => page.getByRole('grid', { name: 'Spectrum points' }).getByRole('row').count())
+      .toBe(5);
     await close();
   });
 });
@@ -128,8 +138,11 @@ describe('Downloads and a calc carried over as JSON (designer)', () => {
       mimeType: 'application/json',
       buffer: json.bytes,
     });
-    await page.getByText('Draft', { exact: true }).first().waitFor();
-    expect(await page.getByRole('grid', { name: 'Storey table' }).getByRole('row').count()).toBe(8);
+    await page.getByRole('note', { name: 'Preliminary' }).waitFor();
+    await page.getByRole('heading', { level: 1, name: /north-south/ }).waitFor();
+    const storeys = page.getByRole('grid', { name: 'Storey table' }).getByRole('row');
+    await storeys.nth(7).waitFor();
+    expect(await storeys.count()).toBe(8); // the header and seven storeys
     await screenshot(page, 'imports-json-draft');
     await close();
   });

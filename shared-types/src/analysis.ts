@@ -216,3 +216,9 @@ export interface StoreyImportResponse {
   storeys: ImportedStorey[];
   errors: ImportCellError[];
 }
+
+/** `POST /api/imports/spectrum`: the points read and every problem found. */
+export interface SpectrumImportResponse {
+  points: SpectrumPointInput[];
+  errors: ImportCellError[];
+}

@@ -13,10 +13,13 @@ import {
 import {
   DISPLAY_UNITS,
   type DisplayUnits,
+  type ImportCellError,
+  type SpectrumImportResponse,
   type StoreyImportResponse,
 } from '@tiermode/shared-types';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { readTable } from './read-table';
+import { parseSpectrumTable } from './spectrum-table';
 import { parseStoreyTable } from './storey-table';
 import { storeyTemplateCsv, storeyTemplateXlsx, XLSX_TYPE } from './templates';
 import { uploadLimits } from './upload-limits.interceptor';
@@ -31,10 +34,24 @@ function unitsOf(value: unknown): DisplayUnits {
   throw new BadRequestException(['units must be "SI" or "US"']);
 }
 
+/**
+ * A result with problems leaves as a 400 that still carries the preview: what was read and
+ * every problem, by row and column, so the user can fix the file (or the grid) without guessing.
+ */
+function refuseWithPreview<T extends { errors: ImportCellError[] }>(result: T): T {
+  if (result.errors.length === 0) return result;
+  throw new BadRequestException({
+    ...result,
+    statusCode: 400,
+    error: 'Bad Request',
+    message: result.errors.map((e) => `Row ${e.row}, ${e.column}: ${e.message}`),
+  });
+}
+
 /** Storey tables in and templates out; nothing is stored, the user applies the result to a grid. */
-@Controller('imports/storeys')
+@Controller('imports')
 export class ImportsController {
-  @Post()
+  @Post('storeys')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   @UseInterceptors(uploadLimits(TABLE_LIMIT, '2 MB'))
@@ -45,21 +62,21 @@ export class ImportsController {
     const units = unitsOf(body?.units);
     if (!file) throw new BadRequestException(['file must be a CSV or XLSX storey table']);
     const { storeys, errors } = parseStoreyTable(await readTable(file.buffer), units);
-    if (errors.length > 0) {
-      // A 400 that still carries the preview: the rows that were read and every problem, by row
-      // and column, so the user can fix the file (or the grid) without guessing.
-      throw new BadRequestException({
-        statusCode: 400,
-        error: 'Bad Request',
-        message: errors.map((e) => `Row ${e.row}, ${e.column}: ${e.message}`),
-        storeys,
-        errors,
-      });
-    }
-    return { storeys, errors };
+    return refuseWithPreview({ storeys, errors });
   }
 
-  @Get('template.csv')
+  @Post('spectrum')
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('create', 'Analysis'))
+  @UseInterceptors(uploadLimits(TABLE_LIMIT, '2 MB'))
+  async spectrum(
+    @UploadedFile() file: Express.Multer.File | undefined,
+  ): Promise<SpectrumImportResponse> {
+    if (!file) throw new BadRequestException(['file must be a CSV or XLSX table of period and Sa']);
+    return refuseWithPreview(parseSpectrumTable(await readTable(file.buffer)));
+  }
+
+  @Get('storeys/template.csv')
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   templateCsv(@Query('units') units?: string): StreamableFile {
     const chosen = unitsOf(units);
@@ -69,7 +86,7 @@ export class ImportsController {
     });
   }
 
-  @Get('template.xlsx')
+  @Get('storeys/template.xlsx')
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   async templateXlsx(@Query('units') units?: string): Promise<StreamableFile> {
     const chosen = unitsOf(units);

@@ -1,5 +1,6 @@
 import type { DisplayUnits, ImportCellError, ImportedStorey } from '@tiermode/shared-types';
 import { ANALYSIS_LIMITS } from '@tiermode/shared-types';
+import { numberCell } from './cells';
 
 /**
  * Exact conversion factors to SI (NIST SP 811, appendix B): 1 ft = 0.3048 m; 1 lbf =
@@ -134,23 +135,11 @@ export function parseStoreyTable(
         values.label = text.slice(0, 60);
         continue;
       }
-      const number = text === '' ? Number.NaN : Number(text.replace(/,/g, ''));
-      if (text === '') {
-        errors.push({ row: rowNumber, column: column.header, message: 'The cell is empty' });
-      } else if (!Number.isFinite(number)) {
-        errors.push({
-          row: rowNumber,
-          column: column.header,
-          message: `"${text.slice(0, 40)}" is not a number`,
-        });
-      } else if (number <= 0) {
-        errors.push({
-          row: rowNumber,
-          column: column.header,
-          message: `${text} must be more than 0`,
-        });
+      const cell = numberCell(text, false);
+      if ('problem' in cell) {
+        errors.push({ row: rowNumber, column: column.header, message: cell.problem });
       } else {
-        values[column.key] = number * column.toSi;
+        values[column.key] = cell.value * column.toSi;
       }
     }
     storeys.push(values);

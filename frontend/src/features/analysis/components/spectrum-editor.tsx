@@ -4,6 +4,7 @@ import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid
 import type { SpectrumInput, SpectrumInterpolation } from '@tiermode/shared-types';
 import { SpectrumChart } from './spectrum-chart';
 import { SpectrumGeneratorForm } from './spectrum-generator-form';
+import { SpectrumUpload } from './spectrum-upload';
 
 interface SpectrumEditorProps {
   spectrum: SpectrumInput;
@@ -88,6 +89,7 @@ export function SpectrumEditor({
               }}
             />
           </Box>
+          {!readOnly && <SpectrumUpload onPoints={setPoints} />}
           <Button
             sx={{ display: readOnly ? 'none' : undefined }}
             onClick={() => {
