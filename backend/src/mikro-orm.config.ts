@@ -5,6 +5,7 @@ import { MIGRATIONS } from './migrations';
 import { AuditEvent } from './audit/audit-event.entity';
 import { Calculation } from './calculations/calculation.entity';
 import { LockedCalculationSubscriber } from './calculations/locked-calculation.subscriber';
+import { Attachment } from './calculations/attachment.entity';
 import { ReviewComment } from './calculations/review-comment.entity';
 import { MailMessage } from './mail/mail-message.entity';
 import { Project } from './projects/project.entity';
@@ -27,7 +28,7 @@ const CONNECTION_PRAGMAS = [
 export function createOrmConfig(databasePath: string) {
   return defineConfig({
     dbName: databasePath,
-    entities: [User, Project, Calculation, ReviewComment, AuditEvent, MailMessage],
+    entities: [User, Project, Calculation, ReviewComment, Attachment, AuditEvent, MailMessage],
     subscribers: [new LockedCalculationSubscriber()],
     extensions: [Migrator],
     // Schema changes go through committed migrations only.

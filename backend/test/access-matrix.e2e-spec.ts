@@ -462,6 +462,30 @@ const MATRIX: Cell[] = [
         .set(as(c)),
   },
   {
+    route: 'POST /api/calculations/:id/attachments',
+    allowed: ['designer'],
+    ok: 201,
+    call: async (c) =>
+      http()
+        .post(`/api/calculations/${await draft()}/attachments`)
+        .set(as(c))
+        .attach('file', Buffer.from('%PDF-1.4\n%%EOF\n'), 'letter.pdf'),
+  },
+  {
+    route: 'GET /api/attachments/:id',
+    allowed: staff,
+    ok: 200,
+    call: async (c) => {
+      const res = await http()
+        .post(`/api/calculations/${await draft()}/attachments`)
+        .set(as('designer'))
+        .attach('file', Buffer.from('%PDF-1.4\n%%EOF\n'), 'letter.pdf')
+        .expect(201);
+      const id = (res.body as { attachments: { id: string }[] }).attachments[0].id;
+      return http().get(`/api/attachments/${id}`).set(as(c));
+    },
+  },
+  {
     route: 'GET /api/verification',
     allowed: everyone,
     ok: 200,

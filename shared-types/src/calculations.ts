@@ -42,6 +42,8 @@ export interface CalculationDto {
   /** The revision this one was revised from. */
   previousRevisionId: string | null;
   comments: ReviewCommentDto[];
+  /** Files kept with the calc; their SHA-256 is sealed with it. */
+  attachments: AttachmentDto[];
   createdAt: string;
   updatedAt: string;
   /** Optimistic-lock version; a PATCH carries the version it was read at. */
@@ -104,6 +106,17 @@ export interface ReviewCommentDto {
   target: string | null;
   resolved: boolean;
   createdAt: string;
+}
+
+/** A file kept with a calc (`POST /api/calculations/:id/attachments`). */
+export interface AttachmentDto {
+  id: string;
+  fileName: string;
+  contentType: 'application/pdf' | 'image/png' | 'image/jpeg';
+  size: number;
+  sha256: string;
+  uploadedBy: { id: string; name: string };
+  uploadedAt: string;
 }
 
 /** `POST /api/calculations/:id/comments`. */

@@ -19,6 +19,7 @@ import {
 } from '@tiermode/shared-types';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
+import { Attachment } from './attachment.entity';
 import { ReviewComment } from './review-comment.entity';
 
 @Entity({ tableName: 'calculations' })
@@ -105,6 +106,9 @@ export class Calculation {
     orderBy: { createdAt: 'asc' },
   })
   comments = new Collection<ReviewComment>(this);
+
+  @OneToMany(() => Attachment, (a) => a.calculation, { orderBy: { uploadedAt: 'asc' } })
+  attachments = new Collection<Attachment>(this);
 
   @Property({ type: 'datetime' })
   createdAt: Date = new Date();

@@ -1,6 +1,7 @@
-import type { CalculationDto } from '@tiermode/shared-types';
+import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
 import type { CalculationRecord } from '../authorization/app-ability';
 import { projectSubject } from '../projects/project.mapper';
+import type { Attachment } from './attachment.entity';
 import type { Calculation } from './calculation.entity';
 
 /**
@@ -40,9 +41,24 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
           createdAt: c.createdAt.toISOString(),
         }))
       : [],
+    attachments: calc.attachments.isInitialized()
+      ? calc.attachments.getItems().map(toAttachmentDto)
+      : [],
     createdAt: calc.createdAt.toISOString(),
     updatedAt: calc.updatedAt.toISOString(),
     version: calc.version,
+  };
+}
+
+export function toAttachmentDto(a: Attachment): AttachmentDto {
+  return {
+    id: a.id,
+    fileName: a.fileName,
+    contentType: a.contentType as AttachmentDto['contentType'],
+    size: a.size,
+    sha256: a.sha256,
+    uploadedBy: { id: a.uploadedBy.id, name: a.uploadedBy.name },
+    uploadedAt: a.uploadedAt.toISOString(),
   };
 }
 

@@ -3,6 +3,8 @@ import { Module } from '@nestjs/common';
 import { AnalysisModule } from '../analysis/analysis.module';
 import { AuditModule } from '../audit/audit.module';
 import { MailModule } from '../mail/mail.module';
+import { AttachmentsController } from './attachments.controller';
+import { AttachmentsService } from './attachments.service';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
 import { CalculationsService } from './calculations.service';
@@ -11,8 +13,13 @@ import { CalculationListsController, LibraryController } from './calculation-lis
 
 @Module({
   imports: [MikroOrmModule.forFeature([Calculation]), AnalysisModule, AuditModule, MailModule],
-  controllers: [CalculationsController, CalculationListsController, LibraryController],
-  providers: [CalculationsService, CalculationListsService],
+  controllers: [
+    CalculationsController,
+    CalculationListsController,
+    LibraryController,
+    AttachmentsController,
+  ],
+  providers: [CalculationsService, CalculationListsService, AttachmentsService],
   exports: [CalculationsService],
 })
 export class CalculationsModule {}

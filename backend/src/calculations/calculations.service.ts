@@ -29,6 +29,7 @@ const POPULATE = [
   'author',
   'reviewer',
   'comments.author',
+  'attachments.uploadedBy',
   'previousRevision',
 ] as const;
 
@@ -401,7 +402,7 @@ export class CalculationsService {
    * A calculation about to be changed: one that is locked or superseded accepts no change (409),
    * one under review accepts none until it is returned (409); otherwise the ability decides.
    */
-  private async loadForWrite(
+  async loadForWrite(
     ability: AppAbility,
     id: string,
     action: 'update' | 'analyse' | 'submit',

@@ -18,6 +18,15 @@ export function sealedContentOf(
     licenseJurisdiction: seal.licenseJurisdiction,
     statement: seal.statement,
     lockedAt: seal.lockedAt,
+    // Only when there are some, so the seals of calcs without files stay as they were made.
+    ...(calc.attachments.isInitialized() && calc.attachments.length > 0
+      ? {
+          attachments: calc.attachments
+            .getItems()
+            .map((a) => ({ fileName: a.fileName, sha256: a.sha256, size: a.size }))
+            .sort((a, b) => a.sha256.localeCompare(b.sha256)),
+        }
+      : {}),
   };
 }
 

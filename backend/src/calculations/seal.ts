@@ -12,6 +12,8 @@ export interface SealedContent {
   licenseJurisdiction: string;
   statement: string;
   lockedAt: string;
+  /** The files kept with the calc, by name and SHA-256; absent when there are none. */
+  attachments?: { fileName: string; sha256: string; size: number }[];
 }
 
 /**

@@ -61,6 +61,8 @@ class EnvironmentVariables {
 export interface AppEnvironment {
   port: number;
   databasePath: string;
+  /** Where attachments are kept: `attachments/` beside the database. */
+  attachmentsDir: string;
   jwtSecret: string;
   demoMode: boolean;
   adminEmail?: string;
@@ -97,6 +99,7 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
   return {
     port,
     databasePath,
+    attachmentsDir: join(dirname(databasePath), 'attachments'),
     jwtSecret: env.JWT_SECRET ?? persistedSecret(dirname(databasePath)),
     demoMode: (env.DEMO ?? 'on') === 'on',
     adminEmail: env.ADMIN_EMAIL,

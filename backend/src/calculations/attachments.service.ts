@@ -1,0 +1,110 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { ForbiddenError, subject } from '@casl/ability';
+import { EntityManager } from '@mikro-orm/sqlite';
+import {
+  BadRequestException,
+  ConflictException,
+  Injectable,
+  NotFoundException,
+} from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
+import type { AppAbility } from '../authorization/app-ability';
+import { AuditService } from '../audit/audit.service';
+import type { AppEnvironment } from '../config/environment';
+import { detectKind } from '../imports/file-checks';
+import type { User } from '../users/user.entity';
+import { Attachment } from './attachment.entity';
+import { calculationSubject, toAttachmentDto } from './calculation.mapper';
+import { CalculationsService } from './calculations.service';
+
+const KINDS = {
+  pdf: { contentType: 'application/pdf', extension: 'pdf' },
+  png: { contentType: 'image/png', extension: 'png' },
+  jpeg: { contentType: 'image/jpeg', extension: 'jpg' },
+} as const;
+
+/** The uploaded name, for showing only: its last path part, printable, at most 200 characters. */
+export function displayName(original: string): string {
+  const last = original.split(/[\\/]/).pop() ?? '';
+  // eslint-disable-next-line no-control-regex
+  const printable = last.replace(/[\u0000-\u001f\u007f"<>|*?:]/g, '_').trim();
+  return (printable || 'attachment').slice(-200);
+}
+
+/** Files kept with a calc; adding one is an edit of a draft, so a locked calc refuses it. */
+@Injectable()
+export class AttachmentsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly calculations: CalculationsService,
+    private readonly audit: AuditService,
+    private readonly config: ConfigService<AppEnvironment, true>,
+  ) {}
+
+  async add(
+    ability: AppAbility,
+    actor: User,
+    calculationId: string,
+    file: { buffer: Buffer; originalname: string },
+  ): Promise<CalculationDto> {
+    const calc = await this.calculations.loadForWrite(ability, calculationId, 'update');
+    const kind = detectKind(file.buffer);
+    if (kind !== 'pdf' && kind !== 'png' && kind !== 'jpeg') {
+      throw new BadRequestException([
+        `file must be a PDF, PNG or JPEG (judged by its content, not its name; this one is ${kind === 'xlsx' ? 'a ZIP archive' : kind === 'text' ? 'text' : 'none of them'})`,
+      ]);
+    }
+    const { contentType, extension } = KINDS[kind];
+    const attachment = this.em.create(Attachment, {
+      calculation: calc,
+      fileName: displayName(file.originalname),
+      storedName: '',
+      contentType,
+      size: file.buffer.length,
+      sha256: createHash('sha256').update(file.buffer).digest('hex'),
+      uploadedBy: actor,
+    });
+    attachment.storedName = `${randomUUID()}.${extension}`;
+    const dir = this.config.get('attachmentsDir', { infer: true });
+    await mkdir(dir, { recursive: true });
+    // Written before the row is committed, under the server's own name: a failed commit leaves
+    // an unreferenced file, never a row without its file.
+    await writeFile(join(dir, attachment.storedName), file.buffer, { flag: 'wx' });
+    calc.attachments.add(attachment);
+    await this.audit.commit(this.em, {
+      calculationId: calc.id,
+      actor,
+      action: 'attached',
+      detail: { fileName: attachment.fileName, sha256: attachment.sha256 },
+    });
+    return this.calculations.get(ability, calc.id);
+  }
+
+  async download(
+    ability: AppAbility,
+    id: string,
+  ): Promise<{ attachment: AttachmentDto; bytes: Buffer }> {
+    const attachment = await this.em.findOne(
+      Attachment,
+      { id },
+      { populate: ['calculation.project.members', 'calculation.author', 'uploadedBy'] },
+    );
+    if (!attachment) throw new NotFoundException(`No attachment with id ${id}`);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(attachment.calculation)),
+    );
+    const bytes = await readFile(
+      join(this.config.get('attachmentsDir', { infer: true }), attachment.storedName),
+    );
+    if (createHash('sha256').update(bytes).digest('hex') !== attachment.sha256) {
+      throw new ConflictException(
+        'The stored file no longer matches the SHA-256 recorded when it was attached; tell your admin',
+      );
+    }
+    return { attachment: toAttachmentDto(attachment), bytes };
+  }
+}

@@ -1,0 +1,117 @@
+import { createHash } from 'node:crypto';
+import { MikroORM } from '@mikro-orm/sqlite';
+import type { CalculationDto } from '@tiermode/shared-types';
+import { binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
+
+const { state, http, as } = useSignedInApp();
+
+// The smallest well-formed files of each kind (invented content).
+const PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
+const PNG = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000000', 'hex');
+
+async function draft(): Promise<CalculationDto> {
+  const project = await http().post('/api/projects').set(as('designer')).send({ name: 'Files' });
+  const calc = await http()
+    .post(`/api/projects/${project.body.id}/calculations`)
+    .set(as('designer'))
+    .send({ title: 'With files', inputs: sampleInputs() })
+    .expect(201);
+  return calc.body as CalculationDto;
+}
+
+const attach = (
+  calcId: string,
+  bytes: Buffer,
+  name: string,
+  role: 'designer' | 'reviewer' = 'designer',
+) =>
+  http().post(`/api/calculations/${calcId}/attachments`).set(as(role)).attach('file', bytes, name);
+
+describe('Attachments', () => {
+  it('keeps a PDF with its SHA-256 under a name of the server’s, and gives it back unchanged', async () => {
+    const calc = await draft();
+    const res = await attach(calc.id, PDF, '../../etc/geotech letter.pdf').expect(201);
+    const [file] = (res.body as CalculationDto).attachments;
+    expect(file).toMatchObject({
+      fileName: 'geotech letter.pdf',
+      contentType: 'application/pdf',
+      size: PDF.length,
+      sha256: createHash('sha256').update(PDF).digest('hex'),
+      uploadedBy: { name: 'Mira Castell' },
+    });
+    const stored = await state.app
+      .get(MikroORM)
+      .em.getConnection()
+      .execute<{ stored_name: string }[]>('select stored_name from attachments where id = ?', [
+        file.id,
+      ]);
+    expect(stored[0].stored_name).toMatch(/^[0-9a-f-]{36}\.pdf$/);
+    const back = await http()
+      .get(`/api/attachments/${file.id}`)
+      .set(as('student'))
+      .buffer(true)
+      .parse(binaryBody);
+    // A student may not read a draft's files.
+    expect(back.status).toBe(403);
+    const mine = await http()
+      .get(`/api/attachments/${file.id}`)
+      .set(as('reviewer'))
+      .buffer(true)
+      .parse(binaryBody)
+      .expect(200)
+      .expect('Content-Type', 'application/pdf');
+    expect(Buffer.compare(mine.body as Buffer, PDF)).toBe(0);
+  });
+
+  it('judges the type by content and refuses anything but PDF, PNG and JPEG', async () => {
+    const calc = await draft();
+    const renamed = await attach(calc.id, Buffer.from('just text'), 'drawing.pdf').expect(400);
+    expect(renamed.body.message[0]).toContain('file must be a PDF, PNG or JPEG');
+    const big = await attach(
+      calc.id,
+      Buffer.concat([PNG, Buffer.alloc(10 * 1024 * 1024)]),
+      'x.png',
+    );
+    expect(big.status).toBe(400);
+    expect(big.body.message).toEqual(['file must be at most 10 MB']);
+    await attach(calc.id, PNG, 'plan.png').expect(201);
+  });
+
+  it('lets only the project’s designers attach, and never to a calc under review or locked', async () => {
+    const calc = await draft();
+    await attach(calc.id, PDF, 'a.pdf', 'reviewer').expect(403);
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    await attach(calc.id, PDF, 'under-review.pdf').expect(409);
+    await http()
+      .post(`/api/calculations/${calc.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted.' })
+      .expect(200);
+    const locked = await attach(calc.id, PDF, 'late.pdf').expect(409);
+    expect(locked.body.message[0]).toContain('can never change');
+  });
+
+  it('seals the attachment’s hash with the calc: a changed file record breaks the seal', async () => {
+    const calc = await draft();
+    const withFile = await attach(calc.id, PDF, 'letter.pdf').expect(201);
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    await http()
+      .post(`/api/calculations/${calc.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted with the letter.' })
+      .expect(200);
+    const valid = await http().get(`/api/calculations/${calc.id}/seal`).set(as('reviewer'));
+    expect(valid.body.valid).toBe(true);
+    await state.app
+      .get(MikroORM)
+      .em.getConnection()
+      .execute('update attachments set sha256 = ? where id = ?', [
+        '0'.repeat(64),
+        (withFile.body as CalculationDto).attachments[0].id,
+      ]);
+    const broken = await http().get(`/api/calculations/${calc.id}/seal`).set(as('reviewer'));
+    expect(broken.body.valid).toBe(false);
+  });
+});
