@@ -2,7 +2,7 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import ExcelJS from 'exceljs';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, SCREENSHOTS, signIn } from './support/browser';
 
@@ -20,6 +20,67 @@ async function workbook(): Promise<Buffer> {
   return Buffer.from(await book.xlsx.writeBuffer());
 }
 
+/** Chooses an item of the calc page's Download menu and returns the file the browser saves. */
+async function download(page: Page, item: string) {
+  await page.getByRole('button', { name: 'Download' }).click();
+  const [saved] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('menuitem', { name: item }).click(),
+  ]);
+  const chunks: Buffer[] = [];
+  for await (const chunk of await saved.createReadStream()) chunks.push(chunk as Buffer);
+  return { name: saved.suggestedFilename(), bytes: Buffer.concat(chunks) };
+}
+
+/** Writes a calc package beside the screenshots and renders its first page with pdftoppm. */
+function renderFirstPage(bytes: Buffer, name: string): string {
+  mkdirSync(SCREENSHOTS, { recursive: true });
+  const file = join(SCREENSHOTS, `${name}.pdf`);
+  writeFileSync(file, bytes);
+  execFileSync('pdftoppm', [
+    '-png',
+    '-r',
+    '80',
+    '-f',
+    '1',
+    '-l',
+    '1',
+    '-singlefile',
+    file,
+    join(SCREENSHOTS, `${name}-page-1`),
+  ]);
+  return join(SCREENSHOTS, `${name}-page-1.png`);
+}
+
+async function uploadWorkbook(page: Page) {
+  await page.getByRole('button', { name: 'Upload a CSV or XLSX file' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Upload a storey table' });
+  await dialog.getByLabel('Storey table file').setInputFiles({
+    name: 'tower.xlsx',
+    mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+    buffer: await workbook(),
+  });
+  await dialog
+    .getByRole('alert', { name: 'Problems in the file' })
+    .getByText('Row 3, Mass (t): "48O" is not a number')
+    .waitFor();
+  return dialog;
+}
+
+async function fixLevel2(page: Page) {
+  const grid = page.getByRole('grid', { name: 'Storey table' });
+  expect(await grid.getByRole('row').count()).toBe(5); // the header and four storeys
+  await page
+    .getByRole('alert', { name: 'Storey table problems' })
+    .getByText('Storey 2: mass must be a positive number')
+    .waitFor();
+  const cell = grid.getByRole('row').filter({ hasText: 'Level 2' }).locator('[data-field="mass"]');
+  await cell.dblclick();
+  await cell.locator('input').fill('480');
+  await cell.locator('input').press('Enter');
+  await page.getByRole('alert', { name: 'Storey table problems' }).waitFor({ state: 'detached' });
+}
+
 describe('Uploading a storey table (designer)', () => {
   let browser: Browser;
   beforeAll(async () => {
@@ -31,35 +92,11 @@ describe('Uploading a storey table (designer)', () => {
     const { page, close } = await newPage(browser);
     await signIn(page, 'designer');
     await page.getByRole('navigation').getByRole('link', { name: 'Quick analysis' }).click();
-    await page.getByRole('button', { name: 'Upload a CSV or XLSX file' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Upload a storey table' });
-    await dialog.getByLabel('Storey table file').setInputFiles({
-      name: 'tower.xlsx',
-      mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
-      buffer: await workbook(),
-    });
-    await dialog
-      .getByRole('alert', { name: 'Problems in the file' })
-      .getByText('Row 3, Mass (t): "48O" is not a number')
-      .waitFor();
+    const dialog = await uploadWorkbook(page);
     await screenshot(page, 'imports-preview');
     await dialog.getByRole('button', { name: 'Replace the table' }).click();
     await dialog.waitFor({ state: 'detached' });
-
-    const grid = page.getByRole('grid', { name: 'Storey table' });
-    expect(await grid.getByRole('row').count()).toBe(5); // the header and four storeys
-    await page
-      .getByRole('alert', { name: 'Storey table problems' })
-      .getByText('Storey 2: mass must be a positive number')
-      .waitFor();
-    const cell = grid
-      .getByRole('row')
-      .filter({ hasText: 'Level 2' })
-      .locator('[data-field="mass"]');
-    await cell.dblclick();
-    await cell.locator('input').fill('480');
-    await cell.locator('input').press('Enter');
-    await page.getByRole('alert', { name: 'Storey table problems' }).waitFor({ state: 'detached' });
+    await fixLevel2(page);
     await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').nth(3).waitFor();
     await screenshot(page, 'imports-fixed-and-analysed');
 
@@ -72,6 +109,28 @@ describe('Uploading a storey table (designer)', () => {
     await expect
       .poll(() => page.getByRole('grid', { name: 'Spectrum points' }).getByRole('row').count())
       .toBe(5);
+    await close();
+  });
+
+  it('on a saved calc: uploads the XLSX, fixes the flagged row, analyses and downloads the package', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'designer');
+    await page.getByRole('navigation').getByRole('link', { name: 'Projects' }).click();
+    await page.getByRole('link', { name: 'Alder Court housing block' }).click();
+    await page.getByRole('button', { name: 'New calculation' }).click();
+    await page.getByLabel('Title').fill('Annex tower, uploaded storeys');
+    await page.getByRole('button', { name: 'Create the draft' }).click();
+    await page.getByRole('heading', { name: 'Annex tower, uploaded storeys' }).waitFor();
+    const dialog = await uploadWorkbook(page);
+    await dialog.getByRole('button', { name: 'Replace the table' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await fixLevel2(page);
+    await page.getByRole('button', { name: 'Save and analyse' }).click();
+    await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').nth(3).waitFor();
+    const pdf = await download(page, 'Calc package (PDF)');
+    expect(pdf.name).toBe('Annex-tower-uploaded-storeys-rev1-calc-package.pdf');
+    expect(pdf.bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(existsSync(renderFirstPage(pdf.bytes, 'calc-package-draft'))).toBe(true);
     await close();
   });
 });
@@ -92,41 +151,14 @@ describe('Downloads and a calc carried over as JSON (designer)', () => {
       .click();
     await page.getByText('The seal is valid').waitFor();
 
-    const save = async (item: string) => {
-      await page.getByRole('button', { name: 'Download' }).click();
-      const [download] = await Promise.all([
-        page.waitForEvent('download'),
-        page.getByRole('menuitem', { name: item }).click(),
-      ]);
-      const stream = await download.createReadStream();
-      const chunks: Buffer[] = [];
-      for await (const chunk of stream) chunks.push(chunk as Buffer);
-      return { name: download.suggestedFilename(), bytes: Buffer.concat(chunks) };
-    };
-    const xlsx = await save('Results (XLSX)');
+    const xlsx = await download(page, 'Results (XLSX)');
     expect(xlsx.name).toMatch(/-rev1-results\.xlsx$/);
     expect(xlsx.bytes.subarray(0, 2).toString()).toBe('PK');
-    const pdf = await save('Calc package (PDF)');
+    const pdf = await download(page, 'Calc package (PDF)');
     expect(pdf.name).toMatch(/-rev1-calc-package\.pdf$/);
     expect(pdf.bytes.subarray(0, 5).toString()).toBe('%PDF-');
-    // The first page, rendered as the reader will see it, kept with the screenshots.
-    mkdirSync(SCREENSHOTS, { recursive: true });
-    const file = join(SCREENSHOTS, 'calc-package.pdf');
-    writeFileSync(file, pdf.bytes);
-    execFileSync('pdftoppm', [
-      '-png',
-      '-r',
-      '80',
-      '-f',
-      '1',
-      '-l',
-      '1',
-      '-singlefile',
-      file,
-      join(SCREENSHOTS, 'calc-package-page-1'),
-    ]);
-    expect(existsSync(join(SCREENSHOTS, 'calc-package-page-1.png'))).toBe(true);
-    const json = await save('Whole calc (JSON)');
+    expect(existsSync(renderFirstPage(pdf.bytes, 'calc-package-locked'))).toBe(true);
+    const json = await download(page, 'Whole calc (JSON)');
     const document = JSON.parse(json.bytes.toString('utf8')) as {
       calculation: { inputs: { storeys: unknown[] } };
     };

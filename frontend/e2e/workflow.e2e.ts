@@ -96,6 +96,16 @@ describe('The review workflow, across the four roles', () => {
       await screenshot(page, 'workflow-03-results');
 
       await openTab(page, 'Review');
+      // An invented geotechnical letter kept with the calc; its hash will be sealed with it.
+      await page.getByLabel('Attachment file').setInputFiles({
+        name: 'geotechnical-letter.pdf',
+        mimeType: 'application/pdf',
+        buffer: Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n'),
+      });
+      await page
+        .getByRole('grid', { name: 'Attachments' })
+        .getByRole('button', { name: 'geotechnical-letter.pdf' })
+        .waitFor();
       await page.getByRole('button', { name: 'Submit for review' }).click();
       await page.getByText('Submitted for review', { exact: true }).first().waitFor();
       await screenshot(page, 'workflow-04-submitted');

@@ -18,6 +18,7 @@ import {
   useSaveAndAnalyse,
   useSaveCalculation,
 } from '@/features/calculations/api/calculations';
+import { AttachmentsPanel } from '@/features/calculations/components/attachments-panel';
 import { CommentThread } from '@/features/calculations/components/comment-thread';
 import { DownloadsMenu } from '@/features/calculations/components/downloads-menu';
 import { HistoryPanel } from '@/features/calculations/components/history-panel';
@@ -244,6 +245,11 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
               />
               <CommentThread calc={calc} />
             </Stack>
+          </Section>
+        )}
+        {tab === 'Review' && (
+          <Section title="Attachments">
+            <AttachmentsPanel calc={calc} editable={editable} />
           </Section>
         )}
         {tab === 'History' && (

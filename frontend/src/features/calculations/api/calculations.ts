@@ -82,6 +82,23 @@ export function useImportCalculation(projectId: string) {
   });
 }
 
+/** Keeps a file with a draft calc, reporting the upload's progress. */
+export function useAttach(id: string, onProgress: (fraction: number) => void) {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (file: File) => {
+      const form = new FormData();
+      form.append('file', file);
+      return (
+        await api.post<CalculationDto>(`/calculations/${id}/attachments`, form, {
+          onUploadProgress: (e) => e.total && onProgress(e.loaded / e.total),
+        })
+      ).data;
+    },
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
 export function useSaveCalculation(id: string) {
   const refresh = useRefresh();
   return useMutation({

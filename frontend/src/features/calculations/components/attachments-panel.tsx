@@ -1,0 +1,124 @@
+import AttachFileIcon from '@mui/icons-material/AttachFile';
+import { Alert, Box, LinearProgress, Link, Stack, Typography } from '@mui/material';
+import { DataGrid, type GridColDef } from '@mui/x-data-grid';
+import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
+import { useState } from 'react';
+import { useDropzone } from 'react-dropzone';
+import { errorMessages } from '@/lib/api-client';
+import { downloadFile } from '@/lib/download';
+import { useAttach } from '../api/calculations';
+
+const KIB = 1024;
+const size = (bytes: number) =>
+  bytes < KIB
+    ? `${bytes} B`
+    : bytes < KIB * KIB
+      ? `${(bytes / KIB).toFixed(1)} KiB`
+      : `${(bytes / KIB / KIB).toFixed(2)} MiB`;
+
+const columns: GridColDef<AttachmentDto>[] = [
+  {
+    field: 'fileName',
+    headerName: 'File',
+    flex: 2,
+    minWidth: 200,
+    renderCell: ({ row }) => (
+      <Link
+        component="button"
+        type="button"
+        onClick={() => void downloadFile(`/attachments/${row.id}`, row.fileName)}
+      >
+        {row.fileName}
+      </Link>
+    ),
+  },
+  { field: 'contentType', headerName: 'Type', width: 140 },
+  { field: 'size', headerName: 'Size', width: 100, valueFormatter: (v: number) => size(v) },
+  {
+    field: 'sha256',
+    headerName: 'SHA-256',
+    width: 150,
+    valueFormatter: (v: string) => `${v.slice(0, 16)}…`,
+  },
+  {
+    field: 'uploadedBy',
+    headerName: 'Added by',
+    width: 150,
+    valueGetter: (_v, row) => row.uploadedBy.name,
+  },
+  {
+    field: 'uploadedAt',
+    headerName: 'Added',
+    width: 170,
+    valueFormatter: (v: string) => new Date(v).toLocaleString(),
+  },
+];
+
+/** Drawings and letters kept with the calc; their SHA-256 is sealed with it when it is locked. */
+export function AttachmentsPanel({ calc, editable }: { calc: CalculationDto; editable: boolean }) {
+  const [progress, setProgress] = useState(0);
+  const attach = useAttach(calc.id, setProgress);
+  const { getRootProps, getInputProps, isDragActive, fileRejections } = useDropzone({
+    accept: { 'application/pdf': ['.pdf'], 'image/png': ['.png'], 'image/jpeg': ['.jpg', '.jpeg'] },
+    maxFiles: 1,
+    multiple: false,
+    disabled: !editable,
+    onDropAccepted: ([file]) => {
+      setProgress(0);
+      attach.mutate(file);
+    },
+  });
+  return (
+    <Stack spacing={1}>
+      {calc.attachments.length > 0 ? (
+        <Box sx={{ height: Math.min(320, 110 + calc.attachments.length * 52) }}>
+          <DataGrid
+            aria-label="Attachments"
+            rows={calc.attachments}
+            columns={columns}
+            density="compact"
+            disableColumnMenu
+            hideFooter
+          />
+        </Box>
+      ) : (
+        <Typography color="text.secondary">No files are kept with this calc.</Typography>
+      )}
+      {editable && (
+        <Box
+          {...getRootProps()}
+          sx={{
+            border: '2px dashed',
+            borderColor: isDragActive ? 'primary.main' : 'divider',
+            borderRadius: 1,
+            p: 2,
+            textAlign: 'center',
+            cursor: 'pointer',
+          }}
+        >
+          <input {...getInputProps()} aria-label="Attachment file" />
+          <AttachFileIcon />
+          <Typography variant="body2">
+            Drop a drawing or a letter here (PDF, PNG or JPEG, at most 10 MB), or click to choose
+            one. Its SHA-256 is sealed with the calc when it is locked.
+          </Typography>
+        </Box>
+      )}
+      {attach.isPending && (
+        <LinearProgress
+          variant={progress > 0 && progress < 1 ? 'determinate' : 'indeterminate'}
+          value={progress * 100}
+          aria-label="Uploading the attachment"
+        />
+      )}
+      {fileRejections.length > 0 && (
+        <Alert severity="error">Choose one file ending in .pdf, .png, .jpg or .jpeg.</Alert>
+      )}
+      {attach.isError && (
+        <Alert severity="error" role="alert">
+          {errorMessages(attach.error).join(' ')}
+        </Alert>
+      )}
+    </Stack>
+  );
+}
