@@ -1,0 +1,39 @@
+import type { CheckResult } from './result';
+
+/** The non-structural elements a building has, which set its EN 1998-1 4.4.3.2 drift limit. */
+export type DriftLimitClass = 'brittle' | 'ductile' | 'none';
+
+/**
+ * EN 1998-1:2004 4.4.3.2(1): d_r nu <= 0.005 h (a: brittle non-structural elements attached),
+ * 0.0075 h (b: ductile ones), 0.010 h (c: none fixed so as to interfere).
+ */
+export function en1998DriftLimitRatio(kind: DriftLimitClass): number {
+  return kind === 'brittle' ? 0.005 : kind === 'ductile' ? 0.0075 : 0.01;
+}
+
+export function en1998DriftCheck(
+  designDrift: number,
+  nu: number,
+  storeyHeight: number,
+  kind: DriftLimitClass,
+): CheckResult<{ ratio: number; limit: number }> {
+  const ratio = (designDrift * nu) / storeyHeight;
+  const limit = en1998DriftLimitRatio(kind);
+  const clause = `EN 1998-1:2004 4.4.3.2(1)${kind === 'brittle' ? 'a' : kind === 'ductile' ? 'b' : 'c'}`;
+  return { value: { ratio, limit }, pass: ratio <= limit, clause };
+}
+
+/**
+ * EN 1998-1:2004 4.4.3.3.1: the modes kept must have effective masses summing to at least 90% of
+ * the total, and every mode with more than 5% must be kept. Returns the fewest first modes that
+ * do both, or null when even all of them do not.
+ */
+export function en1998ModesNeeded(effectiveMassRatios: readonly number[]): number | null {
+  const lastAbove5 = effectiveMassRatios.reduce((last, r, i) => (r > 0.05 ? i : last), -1);
+  let sum = 0;
+  for (let i = 0; i < effectiveMassRatios.length; i += 1) {
+    sum += effectiveMassRatios[i];
+    if (sum >= 0.9 && i >= lastAbove5) return i + 1;
+  }
+  return null;
+}
