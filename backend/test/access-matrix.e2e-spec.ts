@@ -486,6 +486,25 @@ const MATRIX: Cell[] = [
     },
   },
   {
+    route: 'POST /api/checks',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/checks')
+        .set(as(c))
+        .send({
+          ...analysisBody,
+          basis: {
+            code: 'USER',
+            scaleFactor: 1,
+            driftLimitRatio: 0.02,
+            deflectionAmplification: 1,
+            stabilityLimit: 0.25,
+          },
+        }),
+  },
+  {
     route: 'GET /api/verification',
     allowed: everyone,
     ok: 200,

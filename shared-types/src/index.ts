@@ -7,3 +7,4 @@ export * from './analysis';
 export * from './projects';
 export * from './calculations';
 export * from './audit';
+export * from './checks';

@@ -1,10 +1,11 @@
+import { ChecksController } from './checks.controller';
 import { Module } from '@nestjs/common';
 import { AnalysisController } from './analysis.controller';
 import { AnalysisService } from './analysis.service';
 import { SpectraController } from './spectra.controller';
 
 @Module({
-  controllers: [AnalysisController, SpectraController],
+  controllers: [AnalysisController, SpectraController, ChecksController],
   providers: [AnalysisService],
   exports: [AnalysisService],
 })

@@ -2,10 +2,13 @@ import { BadRequestException, Injectable } from '@nestjs/common';
 import type {
   AnalysisRequest,
   AnalysisResponse,
+  ChecksRequest,
+  ChecksResponse,
   ColumnStiffnessRequest,
   ColumnStiffnessResponse,
 } from '@tiermode/shared-types';
 import { analyse, assertAnalysisRequest } from './engine/analyse';
+import { runChecks } from './engine/checks/run-checks';
 import { storeyStiffnessFromColumns } from './engine/column-stiffness';
 
 @Injectable()
@@ -32,6 +35,13 @@ export class AnalysisService {
       }
       throw error;
     }
+  }
+
+  /** The code-basis checks of the request's analysis (engine/checks/run-checks.ts). */
+  checks(request: ChecksRequest): ChecksResponse {
+    return asBadRequest(
+      () => runChecks(JSON.parse(JSON.stringify(request)) as ChecksRequest).checks,
+    );
   }
 
   columnStiffness(request: ColumnStiffnessRequest): ColumnStiffnessResponse {

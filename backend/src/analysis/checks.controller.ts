@@ -1,0 +1,18 @@
+import { Body, Controller, HttpCode, Post } from '@nestjs/common';
+import type { ChecksResponse } from '@tiermode/shared-types';
+import { CheckPolicies } from '../authorization/check-policies.decorator';
+import { AnalysisService } from './analysis.service';
+import { ChecksRequestDto } from './dto/checks-request.dto';
+
+/** The stateless code-basis checks: any signed-in user; nothing is stored. */
+@Controller('checks')
+export class ChecksController {
+  constructor(private readonly analysis: AnalysisService) {}
+
+  @Post()
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('create', 'Analysis'))
+  run(@Body() body: ChecksRequestDto): ChecksResponse {
+    return this.analysis.checks(body);
+  }
+}

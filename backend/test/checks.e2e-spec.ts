@@ -1,0 +1,114 @@
+import type { AnalysisResponse, ChecksResponse } from '@tiermode/shared-types';
+import { sampleInputs, useSignedInApp } from './support/fixtures';
+
+const { http, as } = useSignedInApp();
+
+const ASCE = {
+  code: 'ASCE7-22',
+  sds: 1.0,
+  sd1: 0.6,
+  s1: 0.6,
+  tl: 8,
+  r: 8,
+  cd: 5.5,
+  ie: 1.0,
+  ct: 0.0466,
+  x: 0.9,
+  riskCategory: 'II',
+};
+const EN = {
+  code: 'EN1998-1',
+  ag: 0.25,
+  groundType: 'C',
+  spectrumType: 1,
+  importanceFactor: 1,
+  q: 3.9,
+  nu: 0.5,
+  driftLimitClass: 'ductile',
+};
+
+const checks = (basis: object, extra: object = {}) =>
+  http()
+    .post('/api/checks')
+    .set(as('designer'))
+    .send({ ...sampleInputs(), basis, ...extra });
+
+describe('POST /api/checks', () => {
+  it('compares the modal base shear with ELF, scales by V / Vt, and checks every storey', async () => {
+    const res = await checks(ASCE).expect(200);
+    const body = res.body as ChecksResponse;
+    const analysis = (
+      await http().post('/api/analysis').set(as('designer')).send(sampleInputs()).expect(200)
+    ).body as AnalysisResponse;
+    // Vt = the CQC base shear / (R/Ie) (12.9.1.2); scale = max(1, V / Vt) (12.9.1.4.1).
+    expect(body.modalBaseShear).toBeCloseTo(analysis.combined.cqc.baseShear / 8, 6);
+    expect(body.scaleFactor).toBeCloseTo(Math.max(1, body.elf.baseShear / body.modalBaseShear), 12);
+    expect(body.elf.csGoverns).toMatch(/^Eq\. 12\.8-/);
+    expect(body.storeys).toHaveLength(3);
+    const h = sampleInputs().storeys[0].height;
+    // Design drift = drift / (R/Ie) x Cd / Ie, times the drift scale (12.8.6, 12.9.1.4.2).
+    expect(body.storeys[0].designDriftRatio).toBeCloseTo(
+      ((analysis.combined.cqc.drift[0] / 8) * 5.5 * body.driftScaleFactor) / h,
+      12,
+    );
+    expect(body.storeys[0].driftLimitRatio).toBe(0.02);
+    expect(Array.isArray(body.irregularities)).toBe(true);
+  });
+
+  it('runs the EN 1998-1 and user-defined bases', async () => {
+    const en = (await checks(EN).expect(200)).body as ChecksResponse;
+    expect(en.scaleFactor).toBe(1);
+    expect(en.storeys[0].driftLimitRatio).toBe(0.0075);
+    const user = (
+      await checks({
+        code: 'USER',
+        scaleFactor: 1.2,
+        driftLimitRatio: 0.015,
+        deflectionAmplification: 4,
+        stabilityLimit: 0.2,
+      }).expect(200)
+    ).body as ChecksResponse;
+    expect(user.scaleFactor).toBe(1.2);
+    expect(user.storeys[0].driftLimitRatio).toBe(0.015);
+  });
+
+  it.each([
+    [
+      'R = 0',
+      { ...ASCE, r: 0 },
+      'basis.r must be a positive number (the response modification coefficient)',
+    ],
+    ['a negative SDS', { ...ASCE, sds: -0.5 }, 'basis.sds must be a positive number (g)'],
+    [
+      'an unknown risk category',
+      { ...ASCE, riskCategory: 'V' },
+      'basis.riskCategory must be one of I, II, III, IV',
+    ],
+    [
+      'an unknown ground type',
+      { ...EN, groundType: 'F' },
+      'basis.groundType must be one of A, B, C, D, E',
+    ],
+    ['nu above 1', { ...EN, nu: 2 }, 'basis.nu must be at most 1'],
+    ['an unknown code', { code: 'NBC' }, 'basis.code must be one of ASCE7-22, EN1998-1, USER'],
+    [
+      'seismic weights of the wrong length',
+      { ...ASCE, seismicWeights: [1, 2] },
+      'basis.seismicWeights must have one value per storey (3)',
+    ],
+  ])('refuses %s, naming the field', async (_what, basis, message) => {
+    const res = await checks(basis).expect(400);
+    expect(res.body.message as string[]).toContain(message);
+  });
+
+  it('refuses a missing basis and an unknown combination', async () => {
+    const none = await http()
+      .post('/api/checks')
+      .set(as('designer'))
+      .send(sampleInputs())
+      .expect(400);
+    expect(none.body.message).toContain('basis must be given');
+    const combination = await checks(ASCE, { combination: 'abs' }).expect(400);
+    expect(combination.body.message).toContain('combination must be "cqc" or "srss"');
+  });
+});
