@@ -1,7 +1,8 @@
+import { MikroORM } from '@mikro-orm/sqlite';
 import type { AnalysisResponse, ChecksResponse } from '@tiermode/shared-types';
 import { sampleInputs, useSignedInApp } from './support/fixtures';
 
-const { http, as } = useSignedInApp();
+const { state, http, as } = useSignedInApp();
 
 const ASCE = {
   code: 'ASCE7-22',
@@ -110,5 +111,60 @@ describe('POST /api/checks', () => {
     expect(none.body.message).toContain('basis must be given');
     const combination = await checks(ASCE, { combination: 'abs' }).expect(400);
     expect(combination.body.message).toContain('combination must be "cqc" or "srss"');
+  });
+});
+
+describe('Checks stored with a saved calc', () => {
+  it('keeps the basis, stores the checks when analysed, and seals them with the calc', async () => {
+    const project = await http()
+      .post('/api/projects')
+      .set(as('designer'))
+      .send({ name: 'Checked' });
+    const calc = await http()
+      .post(`/api/projects/${project.body.id}/calculations`)
+      .set(as('designer'))
+      .send({ title: 'With checks', inputs: sampleInputs() })
+      .expect(201);
+    const bad = await http()
+      .patch(`/api/calculations/${calc.body.id}`)
+      .set(as('designer'))
+      .send({ version: calc.body.version, basis: { ...ASCE, r: 0 } })
+      .expect(400);
+    expect(bad.body.message).toContain(
+      'basis.r must be a positive number (the response modification coefficient)',
+    );
+    const withBasis = await http()
+      .patch(`/api/calculations/${calc.body.id}`)
+      .set(as('designer'))
+      .send({ version: calc.body.version, basis: ASCE })
+      .expect(200);
+    expect(withBasis.body).toMatchObject({
+      basis: { code: 'ASCE7-22' },
+      checks: null,
+      analysisStale: true,
+    });
+    await http().post(`/api/calculations/${calc.body.id}/analyse`).set(as('designer')).expect(200);
+    const analysed = await http().get(`/api/calculations/${calc.body.id}`).set(as('designer'));
+    expect(analysed.body.checks.code).toBe('ASCE7-22');
+    expect(analysed.body.checks.storeys).toHaveLength(3);
+    await http().post(`/api/calculations/${calc.body.id}/submit`).set(as('designer')).expect(200);
+    await http()
+      .post(`/api/calculations/${calc.body.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Accepted with its checks.' })
+      .expect(200);
+    expect(
+      (await http().get(`/api/calculations/${calc.body.id}/seal`).set(as('reviewer'))).body.valid,
+    ).toBe(true);
+    await state.app
+      .get(MikroORM)
+      .em.getConnection()
+      .execute(
+        `update calculations set checks = json_set(checks, '$.scaleFactor', 0.5) where id = ?`,
+        [calc.body.id],
+      );
+    expect(
+      (await http().get(`/api/calculations/${calc.body.id}/seal`).set(as('reviewer'))).body.valid,
+    ).toBe(false);
   });
 });

@@ -1,4 +1,5 @@
 import type { AnalysisRequest, AnalysisResponse } from './analysis';
+import type { ChecksResponse, CodeBasisParameters } from './checks';
 import type { CodeBasis } from './projects';
 
 export const CALCULATION_STATUSES = ['draft', 'submitted', 'locked', 'superseded'] as const;
@@ -24,6 +25,10 @@ export interface CalculationDto {
   inputs: CalculationInputs;
   /** The units the calc is shown in; values are stored in SI whatever this says. */
   displayUnits: DisplayUnits;
+  /** The code basis and its parameters; null until the designer sets one. */
+  basis: CodeBasisParameters | null;
+  /** The checks stored with the analysis (sealed with it), or null without a basis. */
+  checks: ChecksResponse | null;
   /** The stored analysis of the inputs, or null until analysed. */
   analysis: AnalysisResponse | null;
   engineVersion: string | null;
@@ -64,6 +69,8 @@ export interface UpdateCalculationRequest {
   title?: string;
   inputs?: CalculationInputs;
   displayUnits?: DisplayUnits;
+  /** The code basis; null removes it. A change makes the stored results stale. */
+  basis?: CodeBasisParameters | null;
 }
 
 /** The record a lock seals: who accepted the calc, under which licence, when, and the hash. */

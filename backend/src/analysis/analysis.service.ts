@@ -39,9 +39,12 @@ export class AnalysisService {
 
   /** The code-basis checks of the request's analysis (engine/checks/run-checks.ts). */
   checks(request: ChecksRequest): ChecksResponse {
-    return asBadRequest(
-      () => runChecks(JSON.parse(JSON.stringify(request)) as ChecksRequest).checks,
-    );
+    return this.analyseAndCheck(request).checks;
+  }
+
+  /** The analysis and its checks, from one run of the engine. */
+  analyseAndCheck(request: ChecksRequest): { analysis: AnalysisResponse; checks: ChecksResponse } {
+    return asBadRequest(() => runChecks(JSON.parse(JSON.stringify(request)) as ChecksRequest));
   }
 
   columnStiffness(request: ColumnStiffnessRequest): ColumnStiffnessResponse {

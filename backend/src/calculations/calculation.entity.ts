@@ -13,6 +13,8 @@ import {
   CALCULATION_STATUSES,
   type AnalysisResponse,
   type CalculationInputs,
+  type ChecksResponse,
+  type CodeBasisParameters,
   type DisplayUnits,
   type CalculationStatus,
   type SealDto,
@@ -27,6 +29,8 @@ export class Calculation {
   [OptionalProps]?:
     | 'revision'
     | 'displayUnits'
+    | 'basis'
+    | 'checks'
     | 'status'
     | 'analysis'
     | 'engineVersion'
@@ -60,6 +64,14 @@ export class Calculation {
   /** Storeys, spectrum, damping and mode selection, in SI base units. */
   @Property({ type: 'json' })
   inputs!: CalculationInputs;
+
+  /** The code basis and its parameters (an input: sealed with the calc when set). */
+  @Property({ type: 'json', nullable: true })
+  basis: CodeBasisParameters | null = null;
+
+  /** The checks made with the stored analysis, by the same engine version (sealed with it). */
+  @Property({ type: 'json', nullable: true })
+  checks: ChecksResponse | null = null;
 
   /** How the calc is shown (values are SI whatever this says); not sealed, it changes no number. */
   @Property({ type: 'string', length: 2, default: 'SI' })

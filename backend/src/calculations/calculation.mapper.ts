@@ -19,6 +19,8 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     status: calc.status,
     inputs: calc.inputs,
     displayUnits: calc.displayUnits,
+    basis: calc.basis,
+    checks: calc.checks,
     analysis: calc.analysis,
     engineVersion: calc.engineVersion,
     inputsChangedAt: calc.inputsChangedAt.toISOString(),

@@ -125,6 +125,11 @@ export class CalculationsService {
     if (body.title !== undefined) calc.title = body.title;
     // Display units change how values are shown, not what they are: the results stay current.
     if (body.displayUnits !== undefined) calc.displayUnits = body.displayUnits;
+    if (body.basis !== undefined) {
+      calc.basis = body.basis === null ? null : (plainInputs(body.basis as never) as never);
+      // A new basis means new checks: the stored results are stale until analysed again.
+      calc.inputsChangedAt = new Date();
+    }
     if (body.inputs !== undefined) {
       const inputs = plainInputs(body.inputs);
       this.analysis.validate(inputs, 'inputs.');
@@ -139,6 +144,7 @@ export class CalculationsService {
         title: body.title !== undefined,
         inputs: body.inputs !== undefined,
         displayUnits: body.displayUnits ?? null,
+        basis: body.basis === undefined ? null : (body.basis?.code ?? 'removed'),
       },
     });
     return toCalculationDto(calc);
@@ -147,8 +153,12 @@ export class CalculationsService {
   /** Runs the engine on the stored inputs and keeps the result with the engine version. */
   async analyse(ability: AppAbility, actor: User, id: string): Promise<AnalysisResponse> {
     const calc = await this.loadForWrite(ability, id, 'analyse');
-    const result = this.analysis.analyse(calc.inputs);
+    // With a code basis, the checks are made from the same analysis and stored beside it.
+    const { analysis: result, checks } = calc.basis
+      ? this.analysis.analyseAndCheck({ ...calc.inputs, basis: calc.basis })
+      : { analysis: this.analysis.analyse(calc.inputs), checks: null };
     calc.analysis = result;
+    calc.checks = checks;
     calc.engineVersion = result.engineVersion;
     calc.analysedAt = new Date();
     await this.audit.commit(this.em, {
@@ -267,6 +277,7 @@ export class CalculationsService {
       revision: calc.revision + 1,
       inputs: structuredClone(calc.inputs),
       displayUnits: calc.displayUnits,
+      basis: calc.basis ? structuredClone(calc.basis) : null,
       author,
       previousRevision: calc,
     });

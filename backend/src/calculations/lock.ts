@@ -18,7 +18,8 @@ export function sealedContentOf(
     licenseJurisdiction: seal.licenseJurisdiction,
     statement: seal.statement,
     lockedAt: seal.lockedAt,
-    // Only when there are some, so the seals of calcs without files stay as they were made.
+    // Only when present, so the seals of calcs without them stay as they were made.
+    ...(calc.basis ? { basis: calc.basis, checks: calc.checks } : {}),
     ...(calc.attachments.isInitialized() && calc.attachments.length > 0
       ? {
           attachments: calc.attachments

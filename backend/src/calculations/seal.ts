@@ -12,6 +12,9 @@ export interface SealedContent {
   licenseJurisdiction: string;
   statement: string;
   lockedAt: string;
+  /** The code basis and the checks made with the analysis; absent when there is no basis. */
+  basis?: unknown;
+  checks?: unknown;
   /** The files kept with the calc, by name and SHA-256; absent when there are none. */
   attachments?: { fileName: string; sha256: string; size: number }[];
 }

@@ -1,5 +1,6 @@
 import {
   DISPLAY_UNITS,
+  type CodeBasisParameters,
   type CreateCalculationRequest,
   type DisplayUnits,
   type UpdateCalculationRequest,
@@ -15,9 +16,11 @@ import {
   IsString,
   MaxLength,
   Min,
+  ValidateIf,
   ValidateNested,
 } from 'class-validator';
 import { AnalysisRequestDto } from '../../analysis/dto/analysis-request.dto';
+import { CodeBasisDto } from '../../analysis/dto/checks-request.dto';
 import { trim } from '../../common/validation/trim';
 
 export class CreateCalculationDto implements CreateCalculationRequest {
@@ -59,4 +62,11 @@ export class UpdateCalculationDto implements UpdateCalculationRequest {
   @IsOptional()
   @IsIn(DISPLAY_UNITS, { message: 'displayUnits must be "SI" or "US"' })
   displayUnits?: DisplayUnits;
+
+  @IsOptional()
+  @ValidateIf((_, value) => value !== null)
+  @IsObject({ message: 'basis must be an object { code, ... } or null' })
+  @ValidateNested()
+  @Type(() => CodeBasisDto)
+  basis?: (CodeBasisParameters & CodeBasisDto) | null;
 }
