@@ -64,3 +64,32 @@ describe('GET /api/calculations/:id/report.pdf', () => {
     await http().get(`/api/calculations/${submitted.id}/report.pdf`).set(as('student')).expect(403);
   });
 });
+
+describe('the calc package of a calc with checks', () => {
+  it('carries the stored checks, drift by drift', async () => {
+    const list = await http().get('/api/calculations?status=draft').set(as('designer')).expect(200);
+    const draft = (list.body as { id: string; title: string; version: number }[]).find((c) =>
+      c.title.startsWith('Loading-dock'),
+    )!;
+    const current = await http().get(`/api/calculations/${draft.id}`).set(as('designer'));
+    await http()
+      .patch(`/api/calculations/${draft.id}`)
+      .set(as('designer'))
+      .send({
+        version: current.body.version,
+        basis: {
+          code: 'USER',
+          scaleFactor: 1.1,
+          driftLimitRatio: 0.01,
+          deflectionAmplification: 4,
+          stabilityLimit: 0.25,
+        },
+      })
+      .expect(200);
+    await http().post(`/api/calculations/${draft.id}/analyse`).set(as('designer')).expect(200);
+    const { text } = await pdfText(await packageOf(draft.id));
+    expect(text).toContain('Scale factors');
+    expect(text).toContain('forces 1.100');
+    expect(text).toMatch(/EXCEEDS/);
+  });
+});

@@ -37,7 +37,7 @@ describe('Migrations and seeding', () => {
     }
   });
 
-  it('seeds the demo buildings: one calc locked with a valid seal, one submitted, all on the audit trail', async () => {
+  it('seeds the demo buildings: one calc locked with a valid seal, one submitted, one draft, all on the audit trail', async () => {
     const orm = await freshOrm();
     try {
       await prepareDatabase(orm, { demoMode: true });
@@ -45,11 +45,12 @@ describe('Migrations and seeding', () => {
       const calcs = await em.find(
         Calculation,
         {},
-        { populate: ['project'], orderBy: { project: { name: 'asc' } } },
+        { populate: ['project'], orderBy: { project: { name: 'asc' }, title: 'asc' } },
       );
       expect(calcs.map((c) => [c.project.name, c.status, c.inputs.storeys.length])).toEqual([
         ['Alder Court housing block', 'locked', 7],
         ['Quarry Lane laboratory', 'submitted', 12],
+        ['Quarry Lane laboratory', 'draft', 12],
       ]);
       const locked = calcs[0];
       const content = locked.seal && sealedContentOf(locked, locked.seal);
@@ -64,11 +65,12 @@ describe('Migrations and seeding', () => {
         'created',
         'analysed',
         'submitted',
+        'created',
       ]);
       expect(firstBrokenEvent(events)).toBeNull();
       // Running again on the seeded database adds nothing.
       await prepareDatabase(orm, { demoMode: true });
-      expect(await orm.em.fork().count(Calculation, {})).toBe(2);
+      expect(await orm.em.fork().count(Calculation, {})).toBe(3);
     } finally {
       await orm.close();
     }

@@ -45,7 +45,8 @@ function laboratory(): CalculationInputs {
 
 /**
  * The demo's projects and calcs, on a freshly seeded demo database: the housing block's calc is
- * locked (it is in the library) and the laboratory's is submitted for review. Each step is on the
+ * locked (it is in the library), the laboratory's east-west calc is submitted for review, and a
+ * north-south draft of the laboratory waits for its code-basis checks. Each step is on the
  * audit trail, as if done through the app.
  */
 export async function seedDemoCalculations(em: EntityManager): Promise<void> {
@@ -117,11 +118,31 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
   });
   await em.flush();
 
-  await make(
+  const lab = await make(
     'Quarry Lane laboratory',
     'Invented: a sloping former quarry site, on dense gravel',
     { codeBasis: 'ASCE7-22', structuralSystem: 'Steel moment frames' },
     'Lateral modal analysis, east-west',
     laboratory(),
   );
+
+  // A draft the designer is still working on: the north-south frames, with a tall loading-dock
+  // storey at the base that is much less stiff than the floors above (invented numbers).
+  const dockStudy = laboratory();
+  dockStudy.storeys[0] = { ...dockStudy.storeys[0], height: 6, stiffness: 0.15e9 };
+  const created = at();
+  const draft = em.create(Calculation, {
+    project: lab.project,
+    title: 'Loading-dock storey study, north-south',
+    inputs: dockStudy,
+    author: designer,
+    inputsChangedAt: created,
+  });
+  await appendAuditEvent(em, {
+    calculationId: draft.id,
+    actor: designer,
+    action: 'created',
+    at: created,
+  });
+  await em.flush();
 }

@@ -264,11 +264,66 @@ function results(doc: Doc, calc: CalculationDto) {
 
 function review(doc: Doc, calc: CalculationDto) {
   heading(doc, 'Code-basis checks');
-  write(
-    doc,
-    'No code-basis checks are part of this version of the calc; the engineer of record makes them.',
-    { width: 495 },
-  );
+  const checks = calc.checks;
+  if (!checks || calc.analysisStale) {
+    write(
+      doc,
+      checks
+        ? 'The stored checks are older than the inputs; analyse again before relying on them.'
+        : 'No code basis is set for this calc; the engineer of record makes the code checks.',
+      { width: 495 },
+    );
+  } else {
+    write(
+      doc,
+      'The checks follow the named clauses as the software reads them; the engineer of record confirms that they apply under the locally adopted code.',
+      { width: 495 },
+    );
+    doc.moveDown(0.3);
+    keyValues(doc, [
+      ['Code basis', checks.code],
+      [
+        'ELF period',
+        `${f.period(checks.elf.period)} s${checks.elf.capped ? ' (capped at Cu Ta)' : ''}`,
+      ],
+      [
+        'ELF base shear',
+        `${f.kN(checks.elf.baseShear)} kN (${checks.elf.clause}${checks.elf.csGoverns ? `, ${checks.elf.csGoverns}` : ''})`,
+      ],
+      ['Modal base shear', `${f.kN(checks.modalBaseShear)} kN`],
+      [
+        'Scale factors',
+        `forces ${checks.scaleFactor.toFixed(3)}, drifts ${checks.driftScaleFactor.toFixed(3)}`,
+      ],
+    ]);
+    table(
+      doc,
+      [
+        { header: 'Storey', width: 50, align: 'right' },
+        { header: 'Drift / height', width: 90, align: 'right' },
+        { header: 'Limit', width: 70, align: 'right' },
+        { header: 'Drift', width: 60 },
+        { header: 'Theta', width: 70, align: 'right' },
+        { header: 'P-delta', width: 155 },
+      ],
+      checks.storeys.map((st) => [
+        String(st.storey),
+        f.ratio(st.designDriftRatio),
+        st.driftLimitRatio.toFixed(4),
+        st.driftOk ? 'OK' : 'EXCEEDS',
+        st.theta.toFixed(4),
+        st.pDelta,
+      ]),
+    );
+    for (const flag of checks.irregularities) {
+      write(
+        doc,
+        `${flag.message} (${flag.clause})${flag.excepted ? ` Excepted: ${flag.exceptionReason}` : ''}`,
+        { width: 495 },
+      );
+    }
+    for (const note of checks.notes) write(doc, note, { width: 495 });
+  }
   heading(doc, 'Review comments');
   if (calc.comments.length === 0) write(doc, 'None.');
   for (const c of calc.comments) {

@@ -13,6 +13,8 @@ import { StoreyTable } from '@/features/analysis/components/storey-table';
 import { UnitsToggle } from '@/features/analysis/components/units-toggle';
 import { useAnalysisInputs } from '@/features/analysis/model/use-analysis-inputs';
 import { useMe } from '@/features/auth/api/get-me';
+import { BasisForm } from '@/features/checks/components/basis-form';
+import { ChecksResults } from '@/features/checks/components/checks-results';
 import {
   useCalculation,
   useSaveAndAnalyse,
@@ -31,7 +33,7 @@ import '@/lib/charts';
 import { sameJson } from '@/lib/same-json';
 import type { UnitSystem } from '@/lib/units';
 
-const TABS = ['Storey table', 'Design spectrum', 'Results', 'Review', 'History'] as const;
+const TABS = ['Storey table', 'Design spectrum', 'Results', 'Checks', 'Review', 'History'] as const;
 type TabName = (typeof TABS)[number];
 
 /** A saved calculation: its inputs, stored results, review and history, in tabs. */
@@ -231,6 +233,33 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
                 </Typography>
                 <AnalysisResults result={result} storeys={calc.inputs.storeys} units={units} />
               </>
+            )}
+          </Stack>
+        )}
+        {tab === 'Checks' && (
+          <Stack spacing={2}>
+            <Section title="Code basis">
+              <BasisForm
+                basis={calc.basis}
+                defaultCode="ASCE7-22"
+                readOnly={!editable}
+                saving={save.isPending}
+                onSave={(basis) => save.mutate({ version: calc.version, basis })}
+              />
+            </Section>
+            {calc.basis === null && (
+              <Alert severity="info">Set a code basis to check this calc against it.</Alert>
+            )}
+            {calc.basis !== null && (calc.checks === null || calc.analysisStale) && (
+              <Alert severity="warning" role="alert">
+                The checks are older than the inputs or the basis, or not made yet: analyse to
+                update them.
+              </Alert>
+            )}
+            {calc.checks && !calc.analysisStale && (
+              <Section title="Checks">
+                <ChecksResults checks={calc.checks} storeys={calc.inputs.storeys} units={units} />
+              </Section>
             )}
           </Stack>
         )}

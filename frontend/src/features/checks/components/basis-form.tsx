@@ -1,0 +1,89 @@
+import { Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { CODE_BASIS_LABELS, CODE_BASES, type CodeBasisParameters } from '@tiermode/shared-types';
+import { useFormik } from 'formik';
+import { useState } from 'react';
+import { basisSchema, FIELDS, fromBasis, toBasis, type BasisFormValues } from './basis-schema';
+
+/** The code basis and its parameters, each with the clause it comes from. */
+export function BasisForm({
+  basis,
+  defaultCode,
+  readOnly,
+  saving,
+  onSave,
+}: {
+  basis: CodeBasisParameters | null;
+  defaultCode: CodeBasisParameters['code'];
+  readOnly: boolean;
+  saving: boolean;
+  onSave: (basis: CodeBasisParameters) => void;
+}) {
+  const [code, setCode] = useState<CodeBasisParameters['code']>(basis?.code ?? defaultCode);
+  const form = useFormik<BasisFormValues>({
+    initialValues: fromBasis(basis, code),
+    enableReinitialize: true,
+    validationSchema: basisSchema(code),
+    onSubmit: (values) => onSave(toBasis(values)),
+  });
+  return (
+    <Stack
+      component="form"
+      spacing={2}
+      onSubmit={form.handleSubmit}
+      noValidate
+      aria-label="Code basis"
+    >
+      <TextField
+        select
+        size="small"
+        label="Code basis"
+        value={code}
+        disabled={readOnly}
+        onChange={(e) => setCode(e.target.value as CodeBasisParameters['code'])}
+        sx={{ maxWidth: 280 }}
+      >
+        {CODE_BASES.map((c) => (
+          <MenuItem key={c} value={c}>
+            {CODE_BASIS_LABELS[c]}
+          </MenuItem>
+        ))}
+      </TextField>
+      <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 2 }}>
+        {FIELDS[code].map((field) => (
+          <TextField
+            key={field.name}
+            select={Boolean(field.options)}
+            size="small"
+            name={field.name}
+            label={field.label}
+            value={form.values[field.name] ?? ''}
+            onChange={form.handleChange}
+            onBlur={form.handleBlur}
+            error={Boolean(form.touched[field.name] && form.errors[field.name])}
+            helperText={(form.touched[field.name] && form.errors[field.name]) || field.clause}
+            disabled={readOnly}
+            sx={{ width: 200 }}
+          >
+            {field.options?.map((o) => (
+              <MenuItem key={o} value={o}>
+                {o}
+              </MenuItem>
+            ))}
+          </TextField>
+        ))}
+      </Stack>
+      {!readOnly && (
+        <div>
+          <Button type="submit" variant="outlined" disabled={saving}>
+            Save the basis
+          </Button>
+        </div>
+      )}
+      <Typography variant="caption" color="text.secondary">
+        Clause numbers are those of {CODE_BASIS_LABELS[code]} as the software reads them; Table
+        12.8-1 and Table 12.12-1 values were entered from memory. Saving makes the stored results
+        stale until the calc is analysed again.
+      </Typography>
+    </Stack>
+  );
+}

@@ -1,0 +1,141 @@
+import type { CodeBasisParameters } from '@tiermode/shared-types';
+import * as yup from 'yup';
+
+/** The form's values: every field as typed text, the code choosing which are used. */
+export interface BasisFormValues {
+  code: CodeBasisParameters['code'];
+  [field: string]: string;
+}
+
+export interface BasisField {
+  name: string;
+  label: string;
+  clause: string;
+  /** 0 allowed (S1), or strictly positive. */
+  zero?: boolean;
+  max?: number;
+  options?: string[];
+}
+
+export const FIELDS: Record<CodeBasisParameters['code'], BasisField[]> = {
+  'ASCE7-22': [
+    { name: 'sds', label: 'SDS (g)', clause: '11.4.5' },
+    { name: 'sd1', label: 'SD1 (g)', clause: '11.4.5' },
+    { name: 's1', label: 'S1 (g)', clause: '11.4.2; 12.8-6 when >= 0.6', zero: true },
+    { name: 'tl', label: 'TL (s)', clause: '11.4.6' },
+    { name: 'r', label: 'R', clause: 'Table 12.2-1' },
+    { name: 'cd', label: 'Cd', clause: 'Table 12.2-1' },
+    { name: 'ie', label: 'Ie', clause: 'Table 1.5-2' },
+    { name: 'ct', label: 'Ct (SI)', clause: 'Table 12.8-2' },
+    { name: 'x', label: 'x', clause: 'Table 12.8-2' },
+    {
+      name: 'riskCategory',
+      label: 'Risk category',
+      clause: 'Table 1.5-1; drift limit Table 12.12-1',
+      options: ['I', 'II', 'III', 'IV'],
+    },
+  ],
+  'EN1998-1': [
+    { name: 'ag', label: 'ag (g)', clause: '3.2.1' },
+    {
+      name: 'groundType',
+      label: 'Ground type',
+      clause: 'Table 3.1',
+      options: ['A', 'B', 'C', 'D', 'E'],
+    },
+    { name: 'spectrumType', label: 'Spectrum type', clause: '3.2.2.2', options: ['1', '2'] },
+    { name: 'importanceFactor', label: 'Importance factor', clause: '4.2.5' },
+    { name: 'q', label: 'Behaviour factor q', clause: '3.2.2.5' },
+    { name: 'nu', label: 'nu', clause: '4.4.3.2(2)', max: 1 },
+    {
+      name: 'driftLimitClass',
+      label: 'Non-structural elements',
+      clause: '4.4.3.2(1) a, b, c',
+      options: ['brittle', 'ductile', 'none'],
+    },
+  ],
+  USER: [
+    { name: 'scaleFactor', label: 'Scale factor', clause: 'user-defined' },
+    { name: 'driftLimitRatio', label: 'Drift limit (drift / height)', clause: 'user-defined' },
+    { name: 'deflectionAmplification', label: 'Deflection amplification', clause: 'user-defined' },
+    { name: 'stabilityLimit', label: 'Stability limit (theta)', clause: 'user-defined' },
+  ],
+};
+
+export function basisSchema(code: CodeBasisParameters['code']) {
+  const shape: Record<string, yup.Schema> = {};
+  for (const field of FIELDS[code]) {
+    if (field.options) {
+      shape[field.name] = yup
+        .string()
+        .oneOf(field.options, `Choose one of ${field.options.join(', ')}`)
+        .required(`${field.label} is needed`);
+      continue;
+    }
+    let number = yup
+      .number()
+      .transform((value: number, original: string) =>
+        String(original).trim() === '' ? undefined : value,
+      )
+      .typeError(`${field.label} must be a number`)
+      .required(`${field.label} is needed`);
+    number = field.zero
+      ? number.min(0, `${field.label} must be 0 or more`)
+      : number.positive(`${field.label} must be more than 0`);
+    if (field.max !== undefined)
+      number = number.max(field.max, `${field.label} must be at most ${field.max}`);
+    shape[field.name] = number;
+  }
+  return yup.object(shape);
+}
+
+/** The typed values as the API takes them. */
+export function toBasis(values: BasisFormValues): CodeBasisParameters {
+  const out: Record<string, unknown> = { code: values.code };
+  for (const field of FIELDS[values.code]) {
+    const text = values[field.name];
+    out[field.name] = field.options && field.name !== 'spectrumType' ? text : Number(text);
+  }
+  return out as unknown as CodeBasisParameters;
+}
+
+export function fromBasis(
+  basis: CodeBasisParameters | null,
+  code: CodeBasisParameters['code'],
+): BasisFormValues {
+  const values: BasisFormValues = { code };
+  const source =
+    basis && basis.code === code ? (basis as unknown as Record<string, unknown>) : DEFAULTS[code];
+  for (const field of FIELDS[code]) {
+    const value = source[field.name];
+    values[field.name] =
+      typeof value === 'number' || typeof value === 'string' ? String(value) : '';
+  }
+  return values;
+}
+
+/** Starting values of an invented site, for the engineer to replace with the project's own. */
+const DEFAULTS: Record<CodeBasisParameters['code'], Record<string, unknown>> = {
+  'ASCE7-22': {
+    sds: 1.0,
+    sd1: 0.6,
+    s1: 0.6,
+    tl: 8,
+    r: 8,
+    cd: 5.5,
+    ie: 1,
+    ct: 0.0466,
+    x: 0.9,
+    riskCategory: 'II',
+  },
+  'EN1998-1': {
+    ag: 0.25,
+    groundType: 'C',
+    spectrumType: 1,
+    importanceFactor: 1,
+    q: 3.9,
+    nu: 0.5,
+    driftLimitClass: 'ductile',
+  },
+  USER: { scaleFactor: 1, driftLimitRatio: 0.02, deflectionAmplification: 1, stabilityLimit: 0.25 },
+};
