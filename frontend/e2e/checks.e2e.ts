@@ -48,7 +48,9 @@ describe('Code-basis checks (designer)', () => {
     await page.getByText('The checks are older than the inputs or the basis').waitFor();
 
     await analyseAndOpenChecks(page);
-    const scale = Number(await page.getByRole('cell', { name: 'Scale factor', exact: true }).textContent());
+    const scale = Number(
+      await page.getByRole('cell', { name: 'Scale factor', exact: true }).textContent(),
+    );
     expect(scale).toBeGreaterThan(1);
     await page
       .getByRole('alert', { name: 'Drift check' })
