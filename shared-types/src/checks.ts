@@ -72,6 +72,8 @@ export interface StoreyCheck {
   thetaMax: number;
   stabilityOk: boolean;
   pDelta: string;
+  /** N: the ELF force at this storey's floor, V distributed with the k exponent (ASCE 7-22 12.8.3); null on other bases. */
+  elfForce: number | null;
   /** N: the combined storey shear used by the checks, before and after scaling. */
   modalShear: number;
   scaledShear: number;

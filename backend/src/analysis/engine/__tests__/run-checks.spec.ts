@@ -49,6 +49,9 @@ describe('runChecks (ASCE 7-22 basis)', () => {
       Math.max(1, checks.elf.baseShear / checks.modalBaseShear),
       12,
     );
+    // The ELF forces add up to V (12.8.3: the Cvx sum to 1).
+    const total = checks.storeys.reduce((sum, s) => sum + (s.elfForce ?? 0), 0);
+    expect(total).toBeCloseTo(checks.elf.baseShear, 3);
     checks.storeys.forEach((s) =>
       expect(s.scaledShear).toBeCloseTo(s.modalShear * checks.scaleFactor, 6),
     );

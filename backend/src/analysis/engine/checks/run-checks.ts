@@ -13,10 +13,12 @@ import { EN1998_GROUND_PARAMETERS } from '../spectrum-generators';
 import { allowableDriftRatio, amplifiedDrift, stabilityCoefficient } from './asce7-drift';
 import {
   approximatePeriod,
+  distributionExponent,
   elfPeriod,
   modalScaleFactor,
   seismicResponseCoefficient,
   upperLimitCoefficient,
+  verticalDistribution,
 } from './asce7-elf';
 import { en1998DriftLimitRatio, en1998ModesNeeded } from './en1998';
 import { verticalIrregularities } from './irregularity';
@@ -86,6 +88,14 @@ function asce7(
       : 1;
   const limit = allowableDriftRatio(basis.riskCategory);
   const above = loadAbove(weights);
+  let elevation = 0;
+  const elevations = storeys.map((s) => (elevation += s.height));
+  const elfForces = verticalDistribution(
+    weights,
+    elevations,
+    baseShear,
+    distributionExponent(period),
+  );
   const storeyChecks: StoreyCheck[] = storeys.map((s, i) => {
     // 12.9.1.2: the analysis used the unreduced spectrum, so the elastic drift is divided by
     // R/Ie, then amplified by Cd/Ie (12.8.6).
@@ -110,6 +120,7 @@ function asce7(
       thetaMax: stability.value.thetaMax,
       stabilityOk: stability.pass,
       pDelta: stability.value.consequence,
+      elfForce: elfForces[i],
       modalShear,
       scaledShear,
     };
@@ -183,6 +194,7 @@ function en1998(
             : theta <= 0.3
               ? 'needs a second-order analysis'
               : 'exceeds the limit',
+      elfForce: null,
       modalShear: combined.storeyShear[i],
       scaledShear: combined.storeyShear[i],
     };
@@ -239,6 +251,7 @@ function userDefined(
       thetaMax: basis.stabilityLimit,
       stabilityOk: theta <= basis.stabilityLimit,
       pDelta: theta <= basis.stabilityLimit ? 'within the limit' : 'exceeds the limit',
+      elfForce: null,
       modalShear: combined.storeyShear[i],
       scaledShear,
     };

@@ -2,7 +2,14 @@ import { Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { CODE_BASIS_LABELS, CODE_BASES, type CodeBasisParameters } from '@tiermode/shared-types';
 import { useFormik } from 'formik';
 import { useState } from 'react';
-import { basisSchema, FIELDS, fromBasis, toBasis, type BasisFormValues } from './basis-schema';
+import {
+  basisSchema,
+  FIELDS,
+  fromBasis,
+  PERIOD_SYSTEMS,
+  toBasis,
+  type BasisFormValues,
+} from './basis-schema';
 
 /** The code basis and its parameters, each with the clause it comes from. */
 export function BasisForm({
@@ -48,6 +55,29 @@ export function BasisForm({
           </MenuItem>
         ))}
       </TextField>
+      {code === 'ASCE7-22' && !readOnly && (
+        <TextField
+          select
+          size="small"
+          label="Structural system (fills Ct and x)"
+          value=""
+          onChange={(e) => {
+            const system = PERIOD_SYSTEMS.find((s) => s.label === e.target.value);
+            if (system) {
+              void form.setFieldValue('ct', String(system.ct));
+              void form.setFieldValue('x', String(system.x));
+            }
+          }}
+          helperText="ASCE 7-22 Table 12.8-2 (SI, from memory)"
+          sx={{ maxWidth: 420 }}
+        >
+          {PERIOD_SYSTEMS.map((s) => (
+            <MenuItem key={s.label} value={s.label}>
+              {s.label} (Ct {s.ct}, x {s.x})
+            </MenuItem>
+          ))}
+        </TextField>
+      )}
       <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 2 }}>
         {FIELDS[code].map((field) => (
           <TextField

@@ -26,6 +26,11 @@ export const FIELDS: Record<CodeBasisParameters['code'], BasisField[]> = {
     { name: 'r', label: 'R', clause: 'Table 12.2-1' },
     { name: 'cd', label: 'Cd', clause: 'Table 12.2-1' },
     { name: 'ie', label: 'Ie', clause: 'Table 1.5-2' },
+    {
+      name: 'omega0',
+      label: 'Omega0',
+      clause: 'Table 12.2-1 (recorded; not used by these checks)',
+    },
     { name: 'ct', label: 'Ct (SI)', clause: 'Table 12.8-2' },
     { name: 'x', label: 'x', clause: 'Table 12.8-2' },
     {
@@ -124,6 +129,7 @@ const DEFAULTS: Record<CodeBasisParameters['code'], Record<string, unknown>> = {
     r: 8,
     cd: 5.5,
     ie: 1,
+    omega0: 3,
     ct: 0.0466,
     x: 0.9,
     riskCategory: 'II',
@@ -139,3 +145,14 @@ const DEFAULTS: Record<CodeBasisParameters['code'], Record<string, unknown>> = {
   },
   USER: { scaleFactor: 1, driftLimitRatio: 0.02, deflectionAmplification: 1, stabilityLimit: 0.25 },
 };
+
+/**
+ * Ct and x of the approximate period by structural system, ASCE 7-22 Table 12.8-2 in SI units
+ * (from memory; check against the edition).
+ */
+export const PERIOD_SYSTEMS: { label: string; ct: number; x: number }[] = [
+  { label: 'Steel moment-resisting frames', ct: 0.0724, x: 0.8 },
+  { label: 'Concrete moment-resisting frames', ct: 0.0466, x: 0.9 },
+  { label: 'Steel eccentrically or buckling-restrained braced frames', ct: 0.0731, x: 0.75 },
+  { label: 'All other structural systems', ct: 0.0488, x: 0.75 },
+];

@@ -118,6 +118,7 @@ export function ChecksResults({
               <TableCell align="right">Theta</TableCell>
               <TableCell align="right">Theta max</TableCell>
               <TableCell>P-delta</TableCell>
+              <TableCell align="right">ELF force ({unitLabel(units, 'force')})</TableCell>
               <TableCell align="right">Shear, unscaled ({unitLabel(units, 'force')})</TableCell>
               <TableCell align="right">Shear, scaled ({unitLabel(units, 'force')})</TableCell>
             </TableRow>
@@ -132,6 +133,9 @@ export function ChecksResults({
                 <TableCell align="right">{s.theta.toFixed(4)}</TableCell>
                 <TableCell align="right">{s.thetaMax.toFixed(3)}</TableCell>
                 <TableCell>{s.pDelta}</TableCell>
+                <TableCell align="right">
+                  {s.elfForce === null ? '-' : formatNumber(toDisplay(units, 'force', s.elfForce))}
+                </TableCell>
                 <TableCell align="right">
                   {formatNumber(toDisplay(units, 'force', s.modalShear))}
                 </TableCell>
