@@ -97,6 +97,16 @@ describe('POST /api/checks', () => {
       { ...ASCE, seismicWeights: [1, 2] },
       'basis.seismicWeights must have one value per storey (3)',
     ],
+    [
+      'seismic masses of the wrong length',
+      { ...EN, seismicMasses: [1] },
+      'basis.seismicMasses must have one value per storey (3)',
+    ],
+    [
+      'a negative seismic mass',
+      { ...EN, seismicMasses: [1, -2, 3] },
+      'basis.seismicMasses must be a list of positive numbers (kg)',
+    ],
   ])('refuses %s, naming the field', async (_what, basis, message) => {
     const res = await checks(basis).expect(400);
     expect(res.body.message as string[]).toContain(message);

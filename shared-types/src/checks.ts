@@ -40,6 +40,8 @@ export interface En1998Basis {
   /** The reduction factor nu of 4.4.3.2 (0.5 or 0.4 by importance class). */
   nu: number;
   driftLimitClass: (typeof DRIFT_LIMIT_CLASSES)[number];
+  /** kg per level, storey 1 first; default the storey masses. */
+  seismicMasses?: number[];
 }
 
 export interface UserBasis {

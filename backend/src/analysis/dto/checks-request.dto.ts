@@ -93,6 +93,18 @@ export class CodeBasisDto {
   })
   driftLimitClass?: (typeof DRIFT_LIMIT_CLASSES)[number];
 
+  @ValidateIf(
+    (o: { code?: string; seismicMasses?: unknown }) => en(o) && o.seismicMasses !== undefined,
+  )
+  @IsArray({ message: 'seismicMasses must be a list of positive numbers (kg), one per storey' })
+  @ArrayMaxSize(500, { message: 'seismicMasses must have at most 500 values' })
+  @IsNumber(FINITE, {
+    each: true,
+    message: 'seismicMasses must be a list of positive numbers (kg)',
+  })
+  @IsPositive({ each: true, message: 'seismicMasses must be a list of positive numbers (kg)' })
+  seismicMasses?: number[];
+
   @positive('USER', 'scaleFactor', 'a multiplier') scaleFactor?: number;
   @positive('USER', 'driftLimitRatio', 'storey drift over height') driftLimitRatio?: number;
   @positive('USER', 'deflectionAmplification', 'a multiplier') deflectionAmplification?: number;

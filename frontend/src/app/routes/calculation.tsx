@@ -242,6 +242,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
               <BasisForm
                 basis={calc.basis}
                 defaultCode="ASCE7-22"
+                storeys={calc.inputs.storeys.length}
                 readOnly={!editable}
                 saving={save.isPending}
                 onSave={(basis) => save.mutate({ version: calc.version, basis })}

@@ -13,7 +13,13 @@ import {
   upperLimitCoefficient,
   verticalDistribution,
 } from '../checks/asce7-elf';
-import { en1998DriftCheck, en1998DriftLimitRatio, en1998ModesNeeded } from '../checks/en1998';
+import {
+  en1998CloselySpaced,
+  en1998DriftCheck,
+  en1998DriftLimitRatio,
+  en1998ModeCountCheck,
+  en1998ModesNeeded,
+} from '../checks/en1998';
 import { verticalIrregularities } from '../checks/irregularity';
 
 // Every expected value below is worked by hand in the comment beside it, from the equation the
@@ -252,5 +258,19 @@ describe('EN 1998-1:2004', () => {
     // 0.85 + 0.06 = 0.91 reaches 90%, but mode 4 has 7% > 5%: 4 modes.
     expect(en1998ModesNeeded([0.85, 0.06, 0.02, 0.07])).toBe(4);
     expect(en1998ModesNeeded([0.5, 0.2])).toBeNull();
+    expect(en1998ModeCountCheck([0.85, 0.06, 0.02, 0.07], 3)).toMatchObject({
+      pass: false,
+      value: { needed: 4 },
+      clause: 'EN 1998-1:2004 4.3.3.3.1',
+    });
+    expect(en1998ModeCountCheck([0.85, 0.06, 0.02, 0.07], 4).pass).toBe(true);
+  });
+
+  it('4.3.3.3.2 closely spaced modes: T_j > 0.9 T_i, not acceptable for SRSS', () => {
+    // 0.95 / 1.0 = 0.95 > 0.9 (modes 1, 2); 0.5 / 0.95 = 0.53 (independent).
+    const close = en1998CloselySpaced([1.0, 0.95, 0.5], 'srss');
+    expect(close).toMatchObject({ pass: false, value: { pairs: [[1, 2]] } });
+    expect(en1998CloselySpaced([1.0, 0.95, 0.5], 'cqc').pass).toBe(true);
+    expect(en1998CloselySpaced([1.0, 0.9, 0.5], 'srss').pass).toBe(true); // 0.9 exactly is independent
   });
 });

@@ -24,7 +24,42 @@ export function en1998DriftCheck(
 }
 
 /**
- * EN 1998-1:2004 4.4.3.3.1: the modes kept must have effective masses summing to at least 90% of
+ * EN 1998-1:2004 4.3.3.3.1 as a check: the modes used must be at least the fewest that reach 90%
+ * of the mass with every mode above 5%.
+ */
+export function en1998ModeCountCheck(
+  effectiveMassRatios: readonly number[],
+  modesUsed: number,
+): CheckResult<{ needed: number | null; used: number }> {
+  const needed = en1998ModesNeeded(effectiveMassRatios);
+  return {
+    value: { needed, used: modesUsed },
+    pass: needed !== null && modesUsed >= needed,
+    clause: 'EN 1998-1:2004 4.3.3.3.1',
+  };
+}
+
+/**
+ * EN 1998-1:2004 4.3.3.3.2: modes i and j are independent when T_j <= 0.9 T_i. Lists the pairs
+ * of consecutive modes that are not; SRSS may not combine those, CQC may.
+ */
+export function en1998CloselySpaced(
+  periods: readonly number[],
+  combination: 'cqc' | 'srss',
+): CheckResult<{ pairs: [number, number][] }> {
+  const pairs: [number, number][] = [];
+  for (let i = 1; i < periods.length; i += 1) {
+    if (periods[i] > 0.9 * periods[i - 1]) pairs.push([i, i + 1]);
+  }
+  return {
+    value: { pairs },
+    pass: pairs.length === 0 || combination === 'cqc',
+    clause: 'EN 1998-1:2004 4.3.3.3.2',
+  };
+}
+
+/**
+ * EN 1998-1:2004 4.3.3.3.1: the modes kept must have effective masses summing to at least 90% of
  * the total, and every mode with more than 5% must be kept. Returns the fewest first modes that
  * do both, or null when even all of them do not.
  */

@@ -20,7 +20,7 @@ import {
   upperLimitCoefficient,
   verticalDistribution,
 } from './asce7-elf';
-import { en1998DriftLimitRatio, en1998ModesNeeded } from './en1998';
+import { en1998CloselySpaced, en1998DriftLimitRatio, en1998ModeCountCheck } from './en1998';
 import { verticalIrregularities } from './irregularity';
 
 type Combined = AnalysisResponse['combined']['cqc'];
@@ -163,7 +163,11 @@ function en1998(
   combined: Combined,
 ): BasisChecks {
   const { storeys } = request;
-  const weights = storeys.map((s) => s.mass * STANDARD_GRAVITY);
+  const masses = basis.seismicMasses ?? storeys.map((s) => s.mass);
+  if (masses.length !== storeys.length) {
+    throw new RangeError(`basis.seismicMasses must have one value per storey (${storeys.length})`);
+  }
+  const weights = masses.map((m) => m * STANDARD_GRAVITY);
   const weight = weights.reduce((a, b) => a + b, 0);
   const first = analysis.modes[0];
   const tc = EN1998_GROUND_PARAMETERS[basis.spectrumType][basis.groundType][2];
@@ -199,7 +203,15 @@ function en1998(
       scaledShear: combined.storeyShear[i],
     };
   });
-  const needed = en1998ModesNeeded(analysis.modes.map((m) => m.effectiveMassRatio));
+  const modeCount = en1998ModeCountCheck(
+    analysis.modes.map((m) => m.effectiveMassRatio),
+    analysis.modes.length,
+  );
+  const needed = modeCount.value.needed;
+  const close = en1998CloselySpaced(
+    analysis.modes.map((m) => m.period),
+    request.combination ?? 'cqc',
+  );
   return {
     code: basis.code,
     elf: {
@@ -224,6 +236,9 @@ function en1998(
         : needed <= analysis.modes.length
           ? `${needed} mode(s) reach 90% of the mass with every mode above 5% (4.3.3.3.1); ${analysis.modes.length} are used.`
           : `At least ${needed} modes are needed (4.3.3.3.1).`,
+      close.value.pairs.length === 0
+        ? 'No two consecutive modes are closely spaced (4.3.3.3.2).'
+        : `Modes ${close.value.pairs.map(([i, j]) => `${i} and ${j}`).join(', ')} are closely spaced (T_j > 0.9 T_i, 4.3.3.3.2): ${close.pass ? 'CQC combines them, as it should' : 'SRSS is not acceptable for them; use CQC'}.`,
       'Theta uses the seismic weight at and above each storey as P_tot (common practice).',
     ],
   };

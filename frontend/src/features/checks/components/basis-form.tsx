@@ -7,6 +7,8 @@ import {
   FIELDS,
   fromBasis,
   PERIOD_SYSTEMS,
+  PER_LEVEL,
+  perLevel,
   toBasis,
   type BasisFormValues,
 } from './basis-schema';
@@ -15,11 +17,14 @@ import {
 export function BasisForm({
   basis,
   defaultCode,
+  storeys,
   readOnly,
   saving,
   onSave,
 }: {
   basis: CodeBasisParameters | null;
+  /** The number of storeys, for the per-level list. */
+  storeys: number;
   defaultCode: CodeBasisParameters['code'];
   readOnly: boolean;
   saving: boolean;
@@ -30,7 +35,16 @@ export function BasisForm({
     initialValues: fromBasis(basis, code),
     enableReinitialize: true,
     validationSchema: basisSchema(code),
-    onSubmit: (values) => onSave(toBasis(values)),
+    validate: (values) => {
+      if (code === 'USER') return {};
+      try {
+        perLevel(values[PER_LEVEL[code].name] ?? '', storeys);
+        return {};
+      } catch (error) {
+        return { [PER_LEVEL[code].name]: (error as Error).message };
+      }
+    },
+    onSubmit: (values) => onSave(toBasis(values, storeys)),
   });
   return (
     <Stack
@@ -102,6 +116,26 @@ export function BasisForm({
           </TextField>
         ))}
       </Stack>
+      {code !== 'USER' && (
+        <TextField
+          size="small"
+          name={PER_LEVEL[code].name}
+          label={PER_LEVEL[code].label}
+          placeholder={
+            code === 'ASCE7-22' ? 'Blank: each storey mass x g' : 'Blank: the storey masses'
+          }
+          value={form.values[PER_LEVEL[code].name] ?? ''}
+          onChange={form.handleChange}
+          onBlur={form.handleBlur}
+          error={Boolean(form.errors[PER_LEVEL[code].name])}
+          helperText={
+            form.errors[PER_LEVEL[code].name] ??
+            `Storey 1 first, separated by commas (${code === 'ASCE7-22' ? 'ASCE 7-22 12.7.2' : 'EN 1998-1:2004 3.2.4'})`
+          }
+          disabled={readOnly}
+          fullWidth
+        />
+      )}
       {!readOnly && (
         <div>
           <Button type="submit" variant="outlined" disabled={saving}>

@@ -94,9 +94,34 @@ export function basisSchema(code: CodeBasisParameters['code']) {
   return yup.object(shape);
 }
 
+/** The optional per-level list of each basis: its field, label and factor to SI. */
+export const PER_LEVEL = {
+  'ASCE7-22': { name: 'seismicWeights', label: 'Seismic weight per level (kN)', toSi: 1000 },
+  'EN1998-1': { name: 'seismicMasses', label: 'Seismic mass per level (t)', toSi: 1000 },
+} as const;
+
+/** "1200, 1150, 980" as numbers, or null when blank; throws a message naming the problem. */
+export function perLevel(text: string, storeys: number): number[] | null {
+  if (text.trim() === '') return null;
+  const values = text
+    .split(/[,;\s]+/)
+    .filter(Boolean)
+    .map(Number);
+  if (values.some((v) => !(v > 0) || !Number.isFinite(v))) {
+    throw new Error('Every value must be a positive number');
+  }
+  if (values.length !== storeys) throw new Error(`Give one value per storey (${storeys})`);
+  return values;
+}
+
 /** The typed values as the API takes them. */
-export function toBasis(values: BasisFormValues): CodeBasisParameters {
+export function toBasis(values: BasisFormValues, storeys: number): CodeBasisParameters {
   const out: Record<string, unknown> = { code: values.code };
+  const list = values.code === 'USER' ? null : PER_LEVEL[values.code];
+  if (list) {
+    const parsed = perLevel(values[list.name] ?? '', storeys);
+    if (parsed) out[list.name] = parsed.map((v) => v * list.toSi);
+  }
   for (const field of FIELDS[values.code]) {
     const text = values[field.name];
     out[field.name] = field.options && field.name !== 'spectrumType' ? text : Number(text);
@@ -115,6 +140,13 @@ export function fromBasis(
     const value = source[field.name];
     values[field.name] =
       typeof value === 'number' || typeof value === 'string' ? String(value) : '';
+  }
+  if (code !== 'USER') {
+    const list = PER_LEVEL[code];
+    const given = source[list.name];
+    values[list.name] = Array.isArray(given)
+      ? given.map((v) => Number((Number(v) / list.toSi).toPrecision(8))).join(', ')
+      : '';
   }
   return values;
 }
