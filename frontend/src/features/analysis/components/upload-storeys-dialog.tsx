@@ -7,7 +7,6 @@ import {
   DialogActions,
   DialogContent,
   DialogTitle,
-  LinearProgress,
   Link,
   MenuItem,
   Stack,
@@ -17,7 +16,7 @@ import {
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { DisplayUnits, ImportedStorey } from '@tiermode/shared-types';
 import { useState } from 'react';
-import { useDropzone } from 'react-dropzone';
+import { FileDrop } from '@/components/feedback/file-drop';
 import { errorMessages } from '@/lib/api-client';
 import { downloadFile } from '@/lib/download';
 import { massHeader, toDisplay, unitLabel, type Quantity } from '@/lib/units';
@@ -51,15 +50,6 @@ export function UploadStoreysDialog({
   const [units, setUnits] = useState<DisplayUnits>(initialUnits);
   const [progress, setProgress] = useState(0);
   const upload = useImportStoreys(setProgress);
-  const { getRootProps, getInputProps, isDragActive, fileRejections } = useDropzone({
-    accept: ACCEPT,
-    maxFiles: 1,
-    multiple: false,
-    onDropAccepted: ([file]) => {
-      setProgress(0);
-      upload.mutate({ file, units });
-    },
-  });
   const outcome = upload.data;
   const cell = (quantity: Quantity, value: number | null) =>
     value === null ? null : Number(toDisplay(units, quantity, value).toPrecision(8));
@@ -128,35 +118,21 @@ export function UploadStoreysDialog({
               </Link>
             </Typography>
           </Stack>
-          <Box
-            {...getRootProps()}
-            sx={{
-              border: '2px dashed',
-              borderColor: isDragActive ? 'primary.main' : 'divider',
-              borderRadius: 1,
-              p: 3,
-              textAlign: 'center',
-              cursor: 'pointer',
-              bgcolor: isDragActive ? 'action.hover' : undefined,
+          <FileDrop
+            accept={ACCEPT}
+            inputLabel="Storey table file"
+            kinds=".csv or .xlsx"
+            icon={<UploadFileIcon />}
+            uploading={upload.isPending}
+            progress={progress}
+            onFile={(file) => {
+              setProgress(0);
+              upload.mutate({ file, units });
             }}
           >
-            <input {...getInputProps()} aria-label="Storey table file" />
-            <UploadFileIcon />
-            <Typography>
-              Drop a CSV or XLSX file here, or click to choose one (at most 2 MB). Storey 1, at the
-              base, is the first row under the headers.
-            </Typography>
-          </Box>
-          {upload.isPending && (
-            <LinearProgress
-              variant={progress > 0 && progress < 1 ? 'determinate' : 'indeterminate'}
-              value={progress * 100}
-              aria-label="Uploading"
-            />
-          )}
-          {fileRejections.length > 0 && (
-            <Alert severity="error">Choose one file ending in .csv or .xlsx.</Alert>
-          )}
+            Drop a CSV or XLSX file here, or click to choose one (at most 2 MB). Storey 1, at the
+            base, is the first row under the headers.
+          </FileDrop>
           {upload.isError && (
             <Alert severity="error">{errorMessages(upload.error).join(' ')}</Alert>
           )}

@@ -1,9 +1,9 @@
 import AttachFileIcon from '@mui/icons-material/AttachFile';
-import { Alert, Box, LinearProgress, Link, Stack, Typography } from '@mui/material';
+import { Alert, Box, Link, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
 import { useState } from 'react';
-import { useDropzone } from 'react-dropzone';
+import { FileDrop } from '@/components/feedback/file-drop';
 import { errorMessages } from '@/lib/api-client';
 import { downloadFile } from '@/lib/download';
 import { useAttach } from '../api/calculations';
@@ -58,16 +58,6 @@ const columns: GridColDef<AttachmentDto>[] = [
 export function AttachmentsPanel({ calc, editable }: { calc: CalculationDto; editable: boolean }) {
   const [progress, setProgress] = useState(0);
   const attach = useAttach(calc.id, setProgress);
-  const { getRootProps, getInputProps, isDragActive, fileRejections } = useDropzone({
-    accept: { 'application/pdf': ['.pdf'], 'image/png': ['.png'], 'image/jpeg': ['.jpg', '.jpeg'] },
-    maxFiles: 1,
-    multiple: false,
-    disabled: !editable,
-    onDropAccepted: ([file]) => {
-      setProgress(0);
-      attach.mutate(file);
-    },
-  });
   return (
     <Stack spacing={1}>
       {calc.attachments.length > 0 ? (
@@ -84,36 +74,26 @@ export function AttachmentsPanel({ calc, editable }: { calc: CalculationDto; edi
       ) : (
         <Typography color="text.secondary">No files are kept with this calc.</Typography>
       )}
-      {editable && (
-        <Box
-          {...getRootProps()}
-          sx={{
-            border: '2px dashed',
-            borderColor: isDragActive ? 'primary.main' : 'divider',
-            borderRadius: 1,
-            p: 2,
-            textAlign: 'center',
-            cursor: 'pointer',
-          }}
-        >
-          <input {...getInputProps()} aria-label="Attachment file" />
-          <AttachFileIcon />
-          <Typography variant="body2">
-            Drop a drawing or a letter here (PDF, PNG or JPEG, at most 10 MB), or click to choose
-            one. Its SHA-256 is sealed with the calc when it is locked.
-          </Typography>
-        </Box>
-      )}
-      {attach.isPending && (
-        <LinearProgress
-          variant={progress > 0 && progress < 1 ? 'determinate' : 'indeterminate'}
-          value={progress * 100}
-          aria-label="Uploading the attachment"
-        />
-      )}
-      {fileRejections.length > 0 && (
-        <Alert severity="error">Choose one file ending in .pdf, .png, .jpg or .jpeg.</Alert>
-      )}
+      <FileDrop
+        accept={{
+          'application/pdf': ['.pdf'],
+          'image/png': ['.png'],
+          'image/jpeg': ['.jpg', '.jpeg'],
+        }}
+        inputLabel="Attachment file"
+        kinds=".pdf, .png, .jpg or .jpeg"
+        icon={<AttachFileIcon />}
+        disabled={!editable}
+        uploading={attach.isPending}
+        progress={progress}
+        onFile={(file) => {
+          setProgress(0);
+          attach.mutate(file);
+        }}
+      >
+        Drop a drawing or a letter here (PDF, PNG or JPEG, at most 10 MB), or click to choose one.
+        Its SHA-256 is sealed with the calc when it is locked.
+      </FileDrop>
       {attach.isError && (
         <Alert severity="error" role="alert">
           {errorMessages(attach.error).join(' ')}
