@@ -1,34 +1,14 @@
-import { Alert, Box, Link } from '@mui/material';
+import { Alert, Box } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { CalculationListQuery, CalculationSummaryDto } from '@tiermode/shared-types';
-import { Link as RouterLink } from 'react-router';
+import { calcColumns } from '@/components/data-display/calc-columns';
 import { errorMessages } from '@/lib/api-client';
 import { useCalculations } from '../api/calculations';
-import { StatusChip } from '@/components/feedback/status-chip';
 
 const date = (value: string | null) => (value ? new Date(value).toLocaleDateString() : '');
 
 const columns: GridColDef<CalculationSummaryDto>[] = [
-  {
-    field: 'title',
-    headerName: 'Calculation',
-    flex: 2,
-    minWidth: 220,
-    renderCell: ({ row }) => (
-      <Link component={RouterLink} to={`/calculations/${row.id}`}>
-        {row.title}
-      </Link>
-    ),
-  },
-  { field: 'projectName', headerName: 'Project', flex: 1.5, minWidth: 160 },
-  { field: 'revision', headerName: 'Revision', type: 'number', width: 90 },
-  {
-    field: 'status',
-    headerName: 'Status',
-    width: 200,
-    renderCell: ({ row }) => <StatusChip status={row.status} />,
-  },
-  { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 90 },
+  ...calcColumns<CalculationSummaryDto>(),
   {
     field: 'author',
     headerName: 'Author',

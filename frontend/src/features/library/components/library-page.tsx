@@ -1,4 +1,4 @@
-import { Alert, Box, Link, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Box, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import {
   CODE_BASES,
@@ -7,33 +7,13 @@ import {
   type LibraryEntryDto,
 } from '@tiermode/shared-types';
 import { useMemo, useState } from 'react';
-import { Link as RouterLink } from 'react-router';
 import { CautionBanner } from '@/components/feedback/caution-banner';
-import { StatusChip } from '@/components/feedback/status-chip';
+import { calcColumns } from '@/components/data-display/calc-columns';
 import { errorMessages } from '@/lib/api-client';
 import { useLibrary } from '../api/library';
 
 const columns: GridColDef<LibraryEntryDto>[] = [
-  {
-    field: 'title',
-    headerName: 'Calculation',
-    flex: 2,
-    minWidth: 220,
-    renderCell: ({ row }) => (
-      <Link component={RouterLink} to={`/calculations/${row.id}`}>
-        {row.title}
-      </Link>
-    ),
-  },
-  { field: 'projectName', headerName: 'Project', flex: 1.5, minWidth: 180 },
-  { field: 'revision', headerName: 'Revision', type: 'number', width: 90 },
-  {
-    field: 'status',
-    headerName: 'Status',
-    width: 200,
-    renderCell: ({ row }) => <StatusChip status={row.status} />,
-  },
-  { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 90 },
+  ...calcColumns<LibraryEntryDto>(),
   {
     field: 'buildingHeight',
     headerName: 'Height (m)',

@@ -1,0 +1,40 @@
+import { Link } from '@mui/material';
+import type { GridColDef, GridValidRowModel } from '@mui/x-data-grid';
+import type { CalculationStatus } from '@tiermode/shared-types';
+import { Link as RouterLink } from 'react-router';
+import { StatusChip } from '@/components/feedback/status-chip';
+
+interface CalcRow extends GridValidRowModel {
+  id: string;
+  title: string;
+  projectName: string;
+  revision: number;
+  status: CalculationStatus;
+  storeyCount: number;
+}
+
+/** The columns every list of calcs starts with: title (opening the calc), project, revision, status, storeys. */
+export function calcColumns<Row extends CalcRow>(): GridColDef<Row>[] {
+  return [
+    {
+      field: 'title',
+      headerName: 'Calculation',
+      flex: 2,
+      minWidth: 220,
+      renderCell: ({ row }) => (
+        <Link component={RouterLink} to={`/calculations/${row.id}`}>
+          {row.title}
+        </Link>
+      ),
+    },
+    { field: 'projectName', headerName: 'Project', flex: 1.5, minWidth: 170 },
+    { field: 'revision', headerName: 'Revision', type: 'number', width: 90 },
+    {
+      field: 'status',
+      headerName: 'Status',
+      width: 200,
+      renderCell: ({ row }) => <StatusChip status={row.status} />,
+    },
+    { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 90 },
+  ];
+}
