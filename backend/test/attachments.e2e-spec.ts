@@ -7,7 +7,11 @@ const { state, http, as } = useSignedInApp();
 
 // The smallest well-formed files of each kind (invented content).
 const PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
-const PNG = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000000', 'hex');
+// A complete 1 x 1 PNG (signature, IHDR, IDAT, IEND; ISO/IEC 15948).
+const PNG = Buffer.from(
+  '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000b49444154789c6360000200000500017a5eab3f0000000049454e44ae426082',
+  'hex',
+);
 
 async function draft(): Promise<CalculationDto> {
   const project = await http().post('/api/projects').set(as('designer')).send({ name: 'Files' });
@@ -75,6 +79,29 @@ describe('Attachments', () => {
     expect(big.status).toBe(400);
     expect(big.body.message).toEqual(['file must be at most 10 MB']);
     await attach(calc.id, PNG, 'plan.png').expect(201);
+  });
+
+  it('refuses polyglots: an image that is also a ZIP, a PDF with a script, markup in a PNG', async () => {
+    const calc = await draft();
+    const zipTail = Buffer.from('504b0506000000000000000000000000000000000000', 'hex');
+    const imageZip = await attach(calc.id, Buffer.concat([PNG, zipTail]), 'plan.png').expect(400);
+    expect(imageZip.body.message).toEqual(['file has other data after the end of the PNG']);
+    const scripted = Buffer.from(
+      '%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction<</S/JavaScript/JS(app.alert(1))>>>>endobj\n%%EOF\n',
+    );
+    const pdf = await attach(calc.id, scripted, 'letter.pdf').expect(400);
+    expect(pdf.body.message).toEqual([
+      'file contains active content (/JavaScript), which is not kept with a calc',
+    ]);
+    const page = Buffer.concat([
+      PNG.subarray(0, 33),
+      Buffer.from('<html><script>x()</script>'),
+      PNG.subarray(33),
+    ]);
+    const markup = await attach(calc.id, page, 'plan.png').expect(400);
+    expect(markup.body.message).toEqual(['file carries web-page markup (<html…) near its start']);
+    const after = await http().get(`/api/calculations/${calc.id}`).set(as('designer')).expect(200);
+    expect(after.body.attachments).toEqual([]);
   });
 
   it('lets only the project’s designers attach, and never to a calc under review or locked', async () => {

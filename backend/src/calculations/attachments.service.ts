@@ -14,7 +14,7 @@ import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { AuditService } from '../audit/audit.service';
 import type { AppEnvironment } from '../config/environment';
-import { detectKind } from '../imports/file-checks';
+import { detectKind, polyglotProblem } from '../imports/file-checks';
 import type { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { calculationSubject, toAttachmentDto } from './calculation.mapper';
@@ -57,6 +57,8 @@ export class AttachmentsService {
         `file must be a PDF, PNG or JPEG (judged by its content, not its name; this one is ${kind === 'xlsx' ? 'a ZIP archive' : kind === 'text' ? 'text' : 'none of them'})`,
       ]);
     }
+    const problem = polyglotProblem(kind, file.buffer);
+    if (problem) throw new BadRequestException([`file ${problem}`]);
     const { contentType, extension } = KINDS[kind];
     const attachment = this.em.create(Attachment, {
       calculation: calc,
