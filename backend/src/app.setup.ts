@@ -3,6 +3,7 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import helmet from 'helmet';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { formatValidationErrors } from './common/validation/format-validation-errors';
+import { setupOpenApi } from './openapi/openapi';
 
 /** What main.ts and the e2e tests both apply to the app, so tests see what users get. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
@@ -30,6 +31,7 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
     }),
   );
   app.useGlobalFilters(new ApiExceptionFilter());
+  setupOpenApi(app);
   app.enableShutdownHooks();
   return app;
 }

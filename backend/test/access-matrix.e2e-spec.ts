@@ -1,5 +1,6 @@
 import type { Response } from 'supertest';
 import { sampleInputs, useSignedInApp } from './support/fixtures';
+import { routesOf } from './support/routes';
 import { signIn, type DemoRole } from './support/test-app';
 
 /**
@@ -554,19 +555,3 @@ describe('the role x action matrix', () => {
     },
   );
 });
-
-/** "METHOD /path" of every route Express has registered. */
-function routesOf(app: typeof state.app): Set<string> {
-  type Router = { stack: { route?: { path: string; methods: Record<string, boolean> } }[] };
-  // Express 5 keeps its router at `router` (Express 4 had `_router`).
-  const router = (app.getHttpAdapter().getInstance() as { router: Router }).router;
-  const routes = new Set<string>();
-  for (const layer of router.stack) {
-    // The catch-all that answers unknown /api paths with a JSON 404 is not a route of its own.
-    if (!layer.route || layer.route.path === '/api' || layer.route.path.includes('{*')) continue;
-    for (const method of Object.keys(layer.route.methods)) {
-      routes.add(`${method.toUpperCase()} ${layer.route.path}`);
-    }
-  }
-  return routes;
-}

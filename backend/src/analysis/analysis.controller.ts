@@ -4,12 +4,18 @@ import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
 import { AnalysisRequestDto } from './dto/analysis-request.dto';
 import { ColumnStiffnessDto } from './dto/column-stiffness.dto';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 /** The stateless analysis: any signed-in user; nothing is stored. */
 @Controller('analysis')
 export class AnalysisController {
   constructor(private readonly analysis: AnalysisService) {}
 
+  @ApiContract({
+    summary: 'Modal response spectrum analysis of a shear building',
+    body: 'AnalysisRequest',
+    returns: 'AnalysisResponse',
+  })
   @Post()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
@@ -18,6 +24,11 @@ export class AnalysisController {
   }
 
   /** A storey's lateral stiffness from its columns, for the storey table's helper. */
+  @ApiContract({
+    summary: 'Storey stiffness from column groups',
+    body: 'ColumnStiffnessRequest',
+    returns: 'ColumnStiffnessResponse',
+  })
   @Post('column-stiffness')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))

@@ -3,12 +3,18 @@ import type { ChecksResponse } from '@tiermode/shared-types';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
 import { ChecksRequestDto } from './dto/checks-request.dto';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 /** The stateless code-basis checks: any signed-in user; nothing is stored. */
 @Controller('checks')
 export class ChecksController {
   constructor(private readonly analysis: AnalysisService) {}
 
+  @ApiContract({
+    summary: 'Analysis with the code-basis checks',
+    body: 'ChecksRequest',
+    returns: 'ChecksResponse',
+  })
   @Post()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))

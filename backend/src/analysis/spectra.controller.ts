@@ -8,10 +8,16 @@ import {
   en1998ElasticSpectrum,
   type En1998SpectrumType,
 } from './engine/spectrum-generators';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 /** Design spectrum generators: an editable point table from code parameters. */
 @Controller('spectra')
 export class SpectraController {
+  @ApiContract({
+    summary: 'A design spectrum from code parameters',
+    body: 'SpectrumGenerateRequest',
+    returns: 'SpectrumGenerateResponse',
+  })
   @Post('generate')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))

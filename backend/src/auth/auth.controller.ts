@@ -9,6 +9,7 @@ import { AuthService } from './auth.service';
 import { ChangePasswordDto } from './dto/change-password.dto';
 import { LoginDto } from './dto/login.dto';
 import { SetPasswordDto } from './dto/set-password.dto';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 /** Every signed-in user may read and manage its own session. */
 const ownAccount = (ability: AppAbility) => ability.can('read', 'User');
@@ -18,18 +19,28 @@ export class AuthController {
   constructor(private readonly auth: AuthService) {}
 
   @Public()
+  @ApiContract({
+    summary: 'Sign in with email and password',
+    body: 'LoginRequest',
+    returns: 'LoginResponse',
+  })
   @Post('login')
   @HttpCode(200)
   login(@Body() body: LoginDto, @Ip() ip: string): Promise<LoginResponse> {
     return this.auth.login(body.email, body.password, ip);
   }
 
+  @ApiContract({
+    summary: 'The signed-in user and the CASL rules of its role',
+    returns: 'MeResponse',
+  })
   @Get('me')
   @CheckPolicies(ownAccount)
   me(@CurrentUser() user: User, @CurrentAbility() ability: AppAbility): MeResponse {
     return this.auth.me(user, ability);
   }
 
+  @ApiContract({ summary: 'Sign out: every earlier token stops working', returns: null })
   @Post('logout')
   @HttpCode(204)
   @CheckPolicies(ownAccount)
@@ -37,6 +48,11 @@ export class AuthController {
     return this.auth.logout(user);
   }
 
+  @ApiContract({
+    summary: 'Change your password',
+    body: 'ChangePasswordRequest',
+    returns: 'LoginResponse',
+  })
   @Post('password')
   @HttpCode(200)
   @CheckPolicies(ownAccount)
@@ -49,6 +65,11 @@ export class AuthController {
   }
 
   @Public()
+  @ApiContract({
+    summary: 'Set a password from a mailed one-time link',
+    body: 'SetPasswordRequest',
+    returns: null,
+  })
   @Post('set-password')
   @HttpCode(204)
   setPassword(@Body() body: SetPasswordDto, @Ip() ip: string): Promise<void> {

@@ -16,6 +16,7 @@ import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import { uploadLimits } from '../imports/upload-limits.interceptor';
 import type { User } from '../users/user.entity';
 import { AttachmentsService } from './attachments.service';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 const ATTACHMENT_LIMIT = 10 * 1024 * 1024;
 
@@ -24,6 +25,11 @@ export class AttachmentsController {
   constructor(private readonly attachments: AttachmentsService) {}
 
   /** Keeps a PDF, PNG or JPEG (at most 10 MB) with a draft calc; answers with the calc. */
+  @ApiContract({
+    summary: 'Keep a PDF, PNG or JPEG (at most 10 MB) with a draft',
+    returns: 'CalculationDto',
+    upload: { description: 'The file; its type is judged by its content' },
+  })
   @Post('calculations/:id/attachments')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   @UseInterceptors(uploadLimits(ATTACHMENT_LIMIT, '10 MB'))
@@ -37,6 +43,10 @@ export class AttachmentsController {
     return this.attachments.add(ability, user, id, file);
   }
 
+  @ApiContract({
+    summary: 'Download an attachment (its SHA-256 is checked first)',
+    file: 'application/octet-stream',
+  })
   @Get('attachments/:id')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async download(

@@ -6,12 +6,17 @@ import { CurrentAbility, CurrentUser } from '../authorization/current.decorators
 import type { User } from '../users/user.entity';
 import { CalculationListsService } from './calculation-lists.service';
 import { ListCalculationsDto } from './dto/list-calculations.dto';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 /** The calcs of record, which students read to learn from. */
 @Controller('library')
 export class LibraryController {
   constructor(private readonly lists: CalculationListsService) {}
 
+  @ApiContract({
+    summary: 'The library: calcs of record (locked and superseded)',
+    returns: 'LibraryEntryDto[]',
+  })
   @Get()
   @CheckPolicies((ability) => ability.can('read', 'Library'))
   list(@CurrentAbility() ability: AppAbility): Promise<LibraryEntryDto[]> {
@@ -24,6 +29,11 @@ export class LibraryController {
 export class CalculationListsController {
   constructor(private readonly lists: CalculationListsService) {}
 
+  @ApiContract({
+    summary: 'Calc summaries the caller may see, filtered',
+    query: 'CalculationListQuery',
+    returns: 'CalculationSummaryDto[]',
+  })
   @Get()
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   list(

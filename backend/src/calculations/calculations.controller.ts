@@ -14,11 +14,13 @@ import { CalculationsService } from './calculations.service';
 import { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
 import { CreateCommentDto, UpdateCommentDto } from './dto/comment.dto';
 import { LockCalculationDto, ReturnCalculationDto } from './dto/review.dto';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 @Controller()
 export class CalculationsController {
   constructor(private readonly calculations: CalculationsService) {}
 
+  @ApiContract({ summary: 'Calcs of a project', returns: 'CalculationDto[]' })
   @Get('projects/:id/calculations')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   list(
@@ -28,6 +30,11 @@ export class CalculationsController {
     return this.calculations.listForProject(ability, projectId);
   }
 
+  @ApiContract({
+    summary: 'Start a draft calc',
+    body: 'CreateCalculationRequest',
+    returns: 'CalculationDto',
+  })
   @Post('projects/:id/calculations')
   @CheckPolicies((ability) => ability.can('create', 'Calculation'))
   create(
@@ -39,6 +46,7 @@ export class CalculationsController {
     return this.calculations.create(ability, user, projectId, body);
   }
 
+  @ApiContract({ summary: 'One calc', returns: 'CalculationDto' })
   @Get('calculations/:id')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   get(
@@ -48,6 +56,11 @@ export class CalculationsController {
     return this.calculations.get(ability, id);
   }
 
+  @ApiContract({
+    summary: 'Edit a draft (optimistic lock on version)',
+    body: 'UpdateCalculationRequest',
+    returns: 'CalculationDto',
+  })
   @Patch('calculations/:id')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   update(
@@ -59,6 +72,10 @@ export class CalculationsController {
     return this.calculations.update(ability, user, id, body);
   }
 
+  @ApiContract({
+    summary: 'Analyse the stored inputs and keep the result',
+    returns: 'AnalysisResponse',
+  })
   @Post('calculations/:id/analyse')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
@@ -70,6 +87,7 @@ export class CalculationsController {
     return this.calculations.analyse(ability, user, id);
   }
 
+  @ApiContract({ summary: 'Submit an analysed draft for review', returns: 'CalculationDto' })
   @Post('calculations/:id/submit')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('submit', 'Calculation'))
@@ -81,6 +99,11 @@ export class CalculationsController {
     return this.calculations.submit(ability, user, id);
   }
 
+  @ApiContract({
+    summary: 'Return a submitted calc to its designers',
+    body: 'ReturnCalculationRequest',
+    returns: 'CalculationDto',
+  })
   @Post('calculations/:id/return')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('return', 'Calculation'))
@@ -93,6 +116,11 @@ export class CalculationsController {
     return this.calculations.returnToDesigner(ability, user, id, body.comment);
   }
 
+  @ApiContract({
+    summary: 'Lock and seal a submitted calc (licensed reviewer)',
+    body: 'LockCalculationRequest',
+    returns: 'CalculationDto',
+  })
   @Post('calculations/:id/lock')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('lock', 'Calculation'))
@@ -105,6 +133,10 @@ export class CalculationsController {
     return this.calculations.lock(ability, user, id, body.statement);
   }
 
+  @ApiContract({
+    summary: 'Start a new revision of a locked calc as a draft',
+    returns: 'CalculationDto',
+  })
   @Post('calculations/:id/revise')
   @CheckPolicies((ability) => ability.can('revise', 'Calculation'))
   revise(
@@ -115,6 +147,7 @@ export class CalculationsController {
     return this.calculations.revise(ability, user, id);
   }
 
+  @ApiContract({ summary: 'Recompute and check the seal', returns: 'SealCheckResponse' })
   @Get('calculations/:id/seal')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   seal(
@@ -124,6 +157,7 @@ export class CalculationsController {
     return this.calculations.checkSeal(ability, id);
   }
 
+  @ApiContract({ summary: 'The audit events of a calc', returns: 'AuditEventDto[]' })
   @Get('calculations/:id/history')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   history(
@@ -133,6 +167,11 @@ export class CalculationsController {
     return this.calculations.history(ability, id);
   }
 
+  @ApiContract({
+    summary: 'Add a review comment',
+    body: 'CreateCommentRequest',
+    returns: 'CalculationDto',
+  })
   @Post('calculations/:id/comments')
   @CheckPolicies((ability) => ability.can('comment', 'Calculation'))
   comment(
@@ -144,6 +183,11 @@ export class CalculationsController {
     return this.calculations.addComment(ability, user, id, body.body, body.target ?? null);
   }
 
+  @ApiContract({
+    summary: 'Resolve or reopen a review comment',
+    body: 'UpdateCommentRequest',
+    returns: 'CalculationDto',
+  })
   @Patch('comments/:id')
   @CheckPolicies((ability) => ability.can('update', 'ReviewComment'))
   resolveComment(

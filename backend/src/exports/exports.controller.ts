@@ -23,6 +23,7 @@ import { ImportCalculationDto } from './dto/import-calculation.dto';
 import { resultTables, type Table } from './results-tables';
 import { spreadsheetSafe } from './spreadsheet-safe';
 import { XLSX_TYPE } from '../imports/templates';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 const TABLES = { modes: 0, modal: 1, combined: 2 } as const;
 
@@ -45,6 +46,10 @@ export class ExportsController {
     return { calc, tables: resultTables(calc.inputs, calc.analysis) };
   }
 
+  @ApiContract({
+    summary: 'One results table as CSV (table=modes, modal or combined)',
+    file: 'text/csv',
+  })
   @Get('calculations/:id/results.csv')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async resultsCsv(
@@ -64,6 +69,7 @@ export class ExportsController {
     });
   }
 
+  @ApiContract({ summary: 'The results tables as an XLSX workbook', file: XLSX_TYPE })
   @Get('calculations/:id/results.xlsx')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async resultsXlsx(
@@ -92,6 +98,10 @@ export class ExportsController {
     });
   }
 
+  @ApiContract({
+    summary: 'The whole calc as JSON, re-importable as a new draft',
+    returns: 'CalculationExport',
+  })
   @Get('calculations/:id/export.json')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async exportJson(
@@ -101,6 +111,11 @@ export class ExportsController {
     return calcExport(await this.calculations.get(ability, id), new Date());
   }
 
+  @ApiContract({
+    summary: 'Import an exported calc as a new draft',
+    body: 'CalculationExport',
+    returns: 'CalculationDto',
+  })
   @Post('projects/:id/calculations/import')
   @CheckPolicies((ability) => ability.can('create', 'Calculation'))
   importJson(

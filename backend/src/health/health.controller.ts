@@ -2,6 +2,7 @@ import { EntityManager, MikroORM } from '@mikro-orm/sqlite';
 import { Controller, Get, ServiceUnavailableException } from '@nestjs/common';
 import type { HealthResponse } from '@tiermode/shared-types';
 import { Public } from '../common/decorators/public.decorator';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 @Controller('health')
 export class HealthController {
@@ -12,6 +13,7 @@ export class HealthController {
 
   /** 200 once the database is open and every committed migration is applied. */
   @Public()
+  @ApiContract({ summary: 'Whether the server and its database answer', returns: 'HealthResponse' })
   @Get()
   async check(): Promise<HealthResponse> {
     try {

@@ -23,6 +23,7 @@ import { parseSpectrumTable } from './spectrum-table';
 import { parseStoreyTable } from './storey-table';
 import { storeyTemplateCsv, storeyTemplateXlsx, XLSX_TYPE } from './templates';
 import { uploadLimits } from './upload-limits.interceptor';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 const TABLE_LIMIT = 2 * 1024 * 1024;
 
@@ -51,6 +52,14 @@ function refuseWithPreview<T extends { errors: ImportCellError[] }>(result: T): 
 /** Storey tables in and templates out; nothing is stored, the user applies the result to a grid. */
 @Controller('imports')
 export class ImportsController {
+  @ApiContract({
+    summary: 'Read a storey table (CSV or XLSX); nothing is stored',
+    returns: 'StoreyImportResponse',
+    upload: {
+      description: 'The table, and its units',
+      fields: { units: { type: 'string', enum: ['SI', 'US'] } },
+    },
+  })
   @Post('storeys')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
@@ -65,6 +74,11 @@ export class ImportsController {
     return refuseWithPreview({ storeys, errors });
   }
 
+  @ApiContract({
+    summary: 'Read a design spectrum table (CSV or XLSX); nothing is stored',
+    returns: 'SpectrumImportResponse',
+    upload: { description: 'The table of period and Sa' },
+  })
   @Post('spectrum')
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
@@ -76,6 +90,7 @@ export class ImportsController {
     return refuseWithPreview(parseSpectrumTable(await readTable(file.buffer)));
   }
 
+  @ApiContract({ summary: 'The storey table template as CSV (units=SI or US)', file: 'text/csv' })
   @Get('storeys/template.csv')
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   templateCsv(@Query('units') units?: string): StreamableFile {
@@ -86,6 +101,7 @@ export class ImportsController {
     });
   }
 
+  @ApiContract({ summary: 'The storey table template as XLSX (units=SI or US)', file: XLSX_TYPE })
   @Get('storeys/template.xlsx')
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   async templateXlsx(@Query('units') units?: string): Promise<StreamableFile> {

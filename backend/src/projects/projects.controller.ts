@@ -7,17 +7,20 @@ import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import type { User } from '../users/user.entity';
 import { CreateProjectDto, UpdateProjectDto } from './dto/project.dto';
 import { ProjectsService } from './projects.service';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 @Controller('projects')
 export class ProjectsController {
   constructor(private readonly projects: ProjectsService) {}
 
+  @ApiContract({ summary: 'Projects the caller may see', returns: 'ProjectDto[]' })
   @Get()
   @CheckPolicies((ability) => ability.can('read', 'Project'))
   list(@CurrentAbility() ability: AppAbility): Promise<ProjectDto[]> {
     return this.projects.list(ability);
   }
 
+  @ApiContract({ summary: 'Create a project', body: 'CreateProjectRequest', returns: 'ProjectDto' })
   @Post()
   @CheckPolicies((ability) => ability.can('create', 'Project'))
   create(
@@ -29,12 +32,17 @@ export class ProjectsController {
   }
 
   /** The active designers, who may be made members (before `:id`, which it would match). */
+  @ApiContract({
+    summary: 'Designers who may be made project members',
+    returns: 'ProjectMemberDto[]',
+  })
   @Get('designers')
   @CheckPolicies((ability) => ability.can('create', 'Project'))
   designers(): Promise<ProjectMemberDto[]> {
     return this.projects.designers();
   }
 
+  @ApiContract({ summary: 'One project', returns: 'ProjectDto' })
   @Get(':id')
   @CheckPolicies((ability) => ability.can('read', 'Project'))
   get(
@@ -44,6 +52,11 @@ export class ProjectsController {
     return this.projects.get(ability, id);
   }
 
+  @ApiContract({
+    summary: 'Change a project (optimistic lock on version)',
+    body: 'UpdateProjectRequest',
+    returns: 'ProjectDto',
+  })
   @Patch(':id')
   @CheckPolicies((ability) => ability.can('update', 'Project'))
   update(
@@ -55,6 +68,7 @@ export class ProjectsController {
     return this.projects.update(ability, user, id, body);
   }
 
+  @ApiContract({ summary: 'Delete a project that has no calcs of record', returns: null })
   @Delete(':id')
   @HttpCode(204)
   @CheckPolicies((ability) => ability.can('delete', 'Project'))

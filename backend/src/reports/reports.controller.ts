@@ -5,12 +5,14 @@ import { CurrentAbility } from '../authorization/current.decorators';
 import { CalculationsService } from '../calculations/calculations.service';
 import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import { buildCalcPackage } from './calc-package';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 @Controller('calculations')
 export class ReportsController {
   constructor(private readonly calculations: CalculationsService) {}
 
   /** The calc package as a PDF; a locked calc's comes from its sealed data, checked first. */
+  @ApiContract({ summary: 'The calc package PDF', file: 'application/pdf' })
   @Get(':id/report.pdf')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async report(

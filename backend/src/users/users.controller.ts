@@ -7,6 +7,7 @@ import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import { CreateUserDto } from './dto/create-user.dto';
 import { UpdateUserDto } from './dto/update-user.dto';
 import { UsersService } from './users.service';
+import { ApiContract } from '../openapi/api-contract.decorator';
 
 /** People and licences: admins only. */
 @Controller('users')
@@ -14,16 +15,27 @@ import { UsersService } from './users.service';
 export class UsersController {
   constructor(private readonly users: UsersService) {}
 
+  @ApiContract({ summary: 'People (admin)', returns: 'UserDto[]' })
   @Get()
   list(@CurrentAbility() ability: AppAbility): Promise<UserDto[]> {
     return this.users.list(ability);
   }
 
+  @ApiContract({
+    summary: 'Add a person; a set-password link is mailed',
+    body: 'CreateUserRequest',
+    returns: 'UserDto',
+  })
   @Post()
   create(@CurrentAbility() ability: AppAbility, @Body() body: CreateUserDto): Promise<UserDto> {
     return this.users.create(ability, body);
   }
 
+  @ApiContract({
+    summary: 'Change a person: role, licence, active, password reset',
+    body: 'UpdateUserRequest',
+    returns: 'UserDto',
+  })
   @Patch(':id')
   update(
     @CurrentAbility() ability: AppAbility,
