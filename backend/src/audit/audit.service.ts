@@ -1,5 +1,5 @@
-import { EntityManager } from '@mikro-orm/sqlite';
-import { Injectable } from '@nestjs/common';
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/sqlite';
+import { ConflictException, Injectable } from '@nestjs/common';
 import type { AuditEventDto, AuditVerifyResponse } from '@tiermode/shared-types';
 import { appendAuditEvent, type AuditEntry } from './append-audit-event';
 import { AuditEvent } from './audit-event.entity';
@@ -7,8 +7,11 @@ import { firstBrokenEvent } from './audit-hash';
 
 @Injectable()
 export class AuditService {
-  // One link at a time: the next event needs the hash of the last one committed. Tiermode runs
-  // as one process on one SQLite connection, so a promise chain is the whole lock.
+  // One link at a time: the next event needs the hash of the last one committed. Within one
+  // process a promise chain is the lock. Across processes on one database file (two servers),
+  // the event's sequence number is the primary key: of two changes that read the same last
+  // link, the second one's insert fails, its whole transaction (the change too) rolls back, and
+  // the caller gets a 409 to reload and try again. Nothing is lost silently.
   private tail: Promise<unknown> = Promise.resolve();
 
   constructor(private readonly em: EntityManager) {}
@@ -20,7 +23,19 @@ export class AuditService {
   commit(em: EntityManager, entry: AuditEntry): Promise<void> {
     const run = this.tail.then(async () => {
       await appendAuditEvent(em, entry);
-      await em.flush();
+      try {
+        await em.flush();
+      } catch (error) {
+        if (
+          error instanceof UniqueConstraintViolationException &&
+          /audit_events/.test(error.message)
+        ) {
+          throw new ConflictException(
+            'Another change was saved at the same moment; nothing of yours was saved: reload and try again',
+          );
+        }
+        throw error;
+      }
     });
     this.tail = run.catch(() => undefined);
     return run;

@@ -1,5 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import {
+  DateTimeType,
+  Entity,
+  ManyToOne,
+  OptionalProps,
+  PrimaryKey,
+  Property,
+} from '@mikro-orm/core';
 import { User } from '../users/user.entity';
 import { Calculation } from './calculation.entity';
 
@@ -37,6 +44,6 @@ export class Attachment {
   @ManyToOne(() => User)
   uploadedBy!: User;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   uploadedAt: Date = new Date();
 }

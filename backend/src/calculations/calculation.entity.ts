@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import {
   Collection,
+  DateTimeType,
   Entity,
   Enum,
   ManyToOne,
@@ -84,10 +85,10 @@ export class Calculation {
   @Property({ type: 'string', length: 20, nullable: true })
   engineVersion: string | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: DateTimeType, nullable: true })
   analysedAt: Date | null = null;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   inputsChangedAt: Date = new Date();
 
   @ManyToOne(() => User)
@@ -97,13 +98,13 @@ export class Calculation {
   @ManyToOne(() => User, { nullable: true })
   reviewer: User | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: DateTimeType, nullable: true })
   submittedAt: Date | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: DateTimeType, nullable: true })
   returnedAt: Date | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: DateTimeType, nullable: true })
   lockedAt: Date | null = null;
 
   /** Set once, by the lock; never changed after. */
@@ -122,10 +123,10 @@ export class Calculation {
   @OneToMany(() => Attachment, (a) => a.calculation, { orderBy: { uploadedAt: 'asc' } })
   attachments = new Collection<Attachment>(this);
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   createdAt: Date = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: DateTimeType, onUpdate: () => new Date() })
   updatedAt: Date = new Date();
 
   @Property({ type: 'integer', version: true })

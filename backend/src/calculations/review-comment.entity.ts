@@ -1,5 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, ManyToOne, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import {
+  DateTimeType,
+  Entity,
+  ManyToOne,
+  OptionalProps,
+  PrimaryKey,
+  Property,
+} from '@mikro-orm/core';
 import { User } from '../users/user.entity';
 import { Calculation } from './calculation.entity';
 
@@ -27,6 +34,6 @@ export class ReviewComment {
   @Property({ type: 'boolean' })
   resolved: boolean = false;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   createdAt: Date = new Date();
 }

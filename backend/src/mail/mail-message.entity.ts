@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, Enum, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import { DateTimeType, Entity, Enum, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
 
 export const MAIL_STATUSES = ['received', 'queued', 'sent', 'failed'] as const;
 export type MailStatus = (typeof MAIL_STATUSES)[number];
@@ -36,9 +36,9 @@ export class MailMessage {
   @Property({ type: 'text', nullable: true })
   lastError: string | null = null;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   createdAt: Date = new Date();
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: DateTimeType, nullable: true })
   sentAt: Date | null = null;
 }

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import {
   Collection,
+  DateTimeType,
   Entity,
   ManyToMany,
   ManyToOne,
@@ -41,10 +42,10 @@ export class Project {
   @ManyToMany({ entity: () => User, pivotTable: 'project_members' })
   members = new Collection<User>(this);
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   createdAt: Date = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: DateTimeType, onUpdate: () => new Date() })
   updatedAt: Date = new Date();
 
   @Property({ type: 'integer', version: true })

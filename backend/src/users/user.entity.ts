@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { Entity, Enum, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
+import { DateTimeType, Entity, Enum, OptionalProps, PrimaryKey, Property } from '@mikro-orm/core';
 import { ROLES, type Role } from '@tiermode/shared-types';
 
 @Entity({ tableName: 'users' })
@@ -55,13 +55,13 @@ export class User {
   @Property({ type: 'string', length: 64, nullable: true, hidden: true })
   setPasswordTokenHash: string | null = null;
 
-  @Property({ type: 'datetime', nullable: true, hidden: true })
+  @Property({ type: DateTimeType, nullable: true, hidden: true })
   setPasswordExpiresAt: Date | null = null;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: DateTimeType })
   createdAt: Date = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: DateTimeType, onUpdate: () => new Date() })
   updatedAt: Date = new Date();
 
   @Property({ type: 'integer', version: true })

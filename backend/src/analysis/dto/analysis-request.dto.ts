@@ -16,7 +16,6 @@ import {
   IsInt,
   IsNumber,
   IsObject,
-  IsOptional,
   IsPositive,
   IsString,
   Max,
@@ -24,13 +23,14 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 const FINITE = { allowNaN: false, allowInfinity: false };
 const isNumber = (field: string, unit: string) =>
   IsNumber(FINITE, { message: `${field} must be a number (${unit})` });
 
 export class StoreyDto implements StoreyInput {
-  @IsOptional()
+  @IsOmittable()
   @IsString({ message: 'label must be text' })
   @MaxLength(60, { message: 'label must be at most 60 characters' })
   label?: string;
@@ -70,7 +70,7 @@ export class SpectrumDto implements SpectrumInput {
   @Type(() => SpectrumPointDto)
   points!: SpectrumPointDto[];
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(['linear', 'log-log'], { message: 'interpolation must be "linear" or "log-log"' })
   interpolation?: SpectrumInterpolation;
 }
@@ -97,12 +97,12 @@ export class AnalysisRequestDto implements AnalysisRequest {
   @Max(0.999999, { message: 'dampingRatio must be less than 1' })
   dampingRatio!: number;
 
-  @IsOptional()
+  @IsOmittable()
   @IsInt({ message: 'modeCount must be a whole number' })
   @Min(1, { message: 'modeCount must be at least 1' })
   modeCount?: number;
 
-  @IsOptional()
+  @IsOmittable()
   @isNumber('targetMassRatio', 'a fraction of the total mass')
   @IsPositive({ message: 'targetMassRatio must be greater than 0' })
   @Max(1, { message: 'targetMassRatio must be at most 1' })

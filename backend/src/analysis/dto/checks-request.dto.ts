@@ -13,7 +13,6 @@ import {
   IsIn,
   IsNumber,
   IsObject,
-  IsOptional,
   IsPositive,
   Max,
   Min,
@@ -21,6 +20,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { AnalysisRequestDto } from './analysis-request.dto';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 const FINITE = { allowNaN: false, allowInfinity: false };
 const CODES = ['ASCE7-22', 'EN1998-1', 'USER'] as const;
@@ -119,7 +119,7 @@ export class ChecksRequestDto extends AnalysisRequestDto implements ChecksReques
   @Type(() => CodeBasisDto)
   basis!: CodeBasisParameters & CodeBasisDto;
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(['cqc', 'srss'], { message: 'combination must be "cqc" or "srss"' })
   combination?: 'cqc' | 'srss';
 }

@@ -3,7 +3,8 @@ import type {
   SpectrumGenerateRequest,
   SpectrumGeneratorKind,
 } from '@tiermode/shared-types';
-import { IsIn, IsNumber, IsOptional, IsPositive, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsNumber, IsPositive, Min, ValidateIf } from 'class-validator';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 const FINITE = { allowNaN: false, allowInfinity: false };
 const asce = (o: SpectrumGenerateDto) => o.kind === 'asce7-two-period';
@@ -39,7 +40,7 @@ export class SpectrumGenerateDto implements SpectrumGenerateRequest {
   @apply(...positiveNumber('agR', 'g'))
   agR?: number;
 
-  @IsOptional()
+  @IsOmittable()
   @apply(...positiveNumber('importanceFactor', 'gamma_I'))
   importanceFactor?: number;
 
@@ -51,7 +52,7 @@ export class SpectrumGenerateDto implements SpectrumGenerateRequest {
   @IsIn([1, 2], { message: 'spectrumType must be 1 or 2' })
   spectrumType?: 1 | 2;
 
-  @IsOptional()
+  @IsOmittable()
   @IsNumber(FINITE, { message: 'dampingPercent must be a number (%)' })
   @Min(0, { message: 'dampingPercent must be a number >= 0 (%)' })
   dampingPercent?: number;
@@ -60,11 +61,11 @@ export class SpectrumGenerateDto implements SpectrumGenerateRequest {
   @apply(...positiveNumber('q', 'behaviour factor'))
   q?: number;
 
-  @IsOptional()
+  @IsOmittable()
   @apply(...positiveNumber('beta', 'lower-bound factor'))
   beta?: number;
 
-  @IsOptional()
+  @IsOmittable()
   @apply(...positiveNumber('maxPeriod', 's'))
   maxPeriod?: number;
 }

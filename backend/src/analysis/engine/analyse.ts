@@ -100,17 +100,44 @@ export function analyse(
     dampingRatio,
   );
   const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
+  const combined = combineModalResponses(
+    storeys,
+    modes.map((m) => m.response),
+    correlation,
+  );
+  assertFiniteResults(combined);
   return {
     totalMass,
     modes,
     availableModes: allModes.length,
-    combined: combineModalResponses(
-      storeys,
-      modes.map((m) => m.response),
-      correlation,
-    ),
+    combined,
     correlation,
     warnings,
     engineVersion: ENGINE_VERSION,
   };
+}
+
+/**
+ * Inputs legal one by one (an Sa of 1e300 g, say) can still overflow double precision on the
+ * way. ABS bounds every modal value (a finite sum of absolute values has finite terms), and SRSS
+ * and CQC square them, so these three being finite means the whole answer is.
+ */
+function assertFiniteResults(combined: AnalysisResponse['combined']): void {
+  for (const response of [combined.abs, combined.srss, combined.cqc]) {
+    const values = [
+      response.baseShear,
+      response.baseMoment,
+      ...response.displacement,
+      ...response.drift,
+      ...response.driftRatio,
+      ...response.floorForce,
+      ...response.storeyShear,
+      ...response.overturningMoment,
+    ];
+    if (!values.every(Number.isFinite)) {
+      throw new RangeError(
+        'the results overflow double precision (above 1e308): check the units of spectrum.points sa (g), storeys mass (kg) and stiffness (N/m)',
+      );
+    }
+  }
 }

@@ -12,7 +12,6 @@ import {
   IsInt,
   IsNotEmpty,
   IsObject,
-  IsOptional,
   IsString,
   MaxLength,
   Min,
@@ -22,6 +21,7 @@ import {
 import { AnalysisRequestDto } from '../../analysis/dto/analysis-request.dto';
 import { CodeBasisDto } from '../../analysis/dto/checks-request.dto';
 import { trim } from '../../common/validation/trim';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 export class CreateCalculationDto implements CreateCalculationRequest {
   @Transform(trim)
@@ -36,7 +36,7 @@ export class CreateCalculationDto implements CreateCalculationRequest {
   @Type(() => AnalysisRequestDto)
   inputs!: AnalysisRequestDto;
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(DISPLAY_UNITS, { message: 'displayUnits must be "SI" or "US"' })
   displayUnits?: DisplayUnits;
 }
@@ -46,24 +46,24 @@ export class UpdateCalculationDto implements UpdateCalculationRequest {
   @Min(1, { message: 'version must be at least 1' })
   version!: number;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @IsString({ message: 'title must be a string' })
   @IsNotEmpty({ message: 'title must not be empty' })
   @MaxLength(200, { message: 'title must be at most 200 characters' })
   title?: string;
 
-  @IsOptional()
+  @IsOmittable()
   @IsObject({ message: 'inputs must be an object { storeys, spectrum, dampingRatio }' })
   @ValidateNested()
   @Type(() => AnalysisRequestDto)
   inputs?: AnalysisRequestDto;
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(DISPLAY_UNITS, { message: 'displayUnits must be "SI" or "US"' })
   displayUnits?: DisplayUnits;
 
-  @IsOptional()
+  @IsOmittable()
   @ValidateIf((_, value) => value !== null)
   @IsObject({ message: 'basis must be an object { code, ... } or null' })
   @ValidateNested()

@@ -1,7 +1,8 @@
 import type { CreateCommentRequest, UpdateCommentRequest } from '@tiermode/shared-types';
 import { Transform } from 'class-transformer';
-import { IsBoolean, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsBoolean, IsNotEmpty, IsString, MaxLength } from 'class-validator';
 import { trim } from '../../common/validation/trim';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 export class CreateCommentDto implements CreateCommentRequest {
   @Transform(trim)
@@ -10,7 +11,7 @@ export class CreateCommentDto implements CreateCommentRequest {
   @MaxLength(10_000, { message: 'body must be at most 10000 characters' })
   body!: string;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @IsString({ message: 'target must be a string, e.g. "storey 3"' })
   @MaxLength(200, { message: 'target must be at most 200 characters' })

@@ -4,12 +4,13 @@ import {
   type CalculationStatus,
 } from '@tiermode/shared-types';
 import { Transform, Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
+import { IsIn, IsInt, IsUUID, Max, Min } from 'class-validator';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 /** `GET /api/calculations` query: every part optional (CalculationListQuery). */
 export class ListCalculationsDto implements Omit<CalculationListQuery, 'status'> {
   /** Parsed from `status=draft,submitted`. */
-  @IsOptional()
+  @IsOmittable()
   @Transform(({ value }: { value: unknown }) =>
     typeof value === 'string' ? value.split(',').map((s) => s.trim()) : value,
   )
@@ -19,19 +20,19 @@ export class ListCalculationsDto implements Omit<CalculationListQuery, 'status'>
   })
   status?: CalculationStatus[];
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(['me'], { message: 'author must be "me"' })
   author?: 'me';
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(['me'], { message: 'notAuthor must be "me"' })
   notAuthor?: 'me';
 
-  @IsOptional()
+  @IsOmittable()
   @IsUUID('all', { message: 'projectId must be a project id (UUID)' })
   projectId?: string;
 
-  @IsOptional()
+  @IsOmittable()
   @Type(() => Number)
   @IsInt({ message: 'limit must be a whole number from 1 to 200' })
   @Min(1, { message: 'limit must be a whole number from 1 to 200' })

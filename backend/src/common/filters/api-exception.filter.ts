@@ -1,6 +1,8 @@
 import { ForbiddenError } from '@casl/ability';
 import {
+  DriverException,
   NotFoundError,
+  NotNullConstraintViolationException,
   OptimisticLockError,
   UniqueConstraintViolationException,
 } from '@mikro-orm/core';
@@ -61,13 +63,26 @@ export class ApiExceptionFilter implements ExceptionFilter {
         message: 'A record with these values already exists',
       };
     }
+    if (exception instanceof NotNullConstraintViolationException) {
+      // Validation should have refused the request; say so in the log, and answer as bad input.
+      this.logger.error(
+        `A request reached the database without a required value: ${exception.message}`,
+      );
+      return { statusCode: HttpStatus.BAD_REQUEST, message: 'A required value is missing' };
+    }
     if (exception instanceof NotFoundError) {
       return { statusCode: HttpStatus.NOT_FOUND, message: 'Not found' };
     }
     const clientError = asClientHttpError(exception);
     if (clientError) return clientError;
+    // A database error's message holds the SQL and its values (a password hash, say): log only
+    // the driver's own reason.
     this.logger.error(
-      exception instanceof Error ? (exception.stack ?? exception.message) : String(exception),
+      exception instanceof DriverException
+        ? `${exception.name}: ${driverReason(exception)}`
+        : exception instanceof Error
+          ? (exception.stack ?? exception.message)
+          : String(exception),
     );
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
   }
@@ -111,4 +126,10 @@ function httpStatusName(statusCode: number): string {
         .map((w) => w[0].toUpperCase() + w.slice(1))
         .join(' ')
     : 'Error';
+}
+
+/** "SQLITE_CONSTRAINT: NOT NULL constraint failed: calculations.title", without the query. */
+function driverReason(exception: DriverException): string {
+  const at = exception.message.lastIndexOf(' - ');
+  return at >= 0 ? exception.message.slice(at + 3) : (exception.code ?? 'database error');
 }

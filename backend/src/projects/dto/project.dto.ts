@@ -12,7 +12,6 @@ import {
   IsIn,
   IsInt,
   IsNotEmpty,
-  IsOptional,
   IsString,
   IsUUID,
   MaxLength,
@@ -20,6 +19,7 @@ import {
   ValidateIf,
 } from 'class-validator';
 import { trim } from '../../common/validation/trim';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 export class CreateProjectDto implements CreateProjectRequest {
   @Transform(trim)
@@ -28,17 +28,17 @@ export class CreateProjectDto implements CreateProjectRequest {
   @MaxLength(200, { message: 'name must be at most 200 characters' })
   name!: string;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @IsString({ message: 'site must be a string' })
   @MaxLength(1000, { message: 'site must be at most 1000 characters' })
   site?: string;
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(CODE_BASES, { message: `codeBasis must be one of ${CODE_BASES.join(', ')}` })
   codeBasis?: CodeBasis;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @IsString({ message: 'structuralSystem must be a string' })
   @MaxLength(120, { message: 'structuralSystem must be at most 120 characters' })
@@ -46,37 +46,37 @@ export class CreateProjectDto implements CreateProjectRequest {
 }
 
 export class UpdateProjectDto implements UpdateProjectRequest {
-  @IsOptional()
+  @IsOmittable()
   @IsInt({ message: 'version must be an integer' })
   @Min(1, { message: 'version must be at least 1' })
   version?: number;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @IsString({ message: 'name must be a string' })
   @IsNotEmpty({ message: 'name must not be empty' })
   @MaxLength(200, { message: 'name must be at most 200 characters' })
   name?: string;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @ValidateIf((_, value) => value !== null)
   @IsString({ message: 'site must be a string' })
   @MaxLength(1000, { message: 'site must be at most 1000 characters' })
   site?: string | null;
 
-  @IsOptional()
+  @IsOmittable()
   @IsIn(CODE_BASES, { message: `codeBasis must be one of ${CODE_BASES.join(', ')}` })
   codeBasis?: CodeBasis;
 
-  @IsOptional()
+  @IsOmittable()
   @Transform(trim)
   @ValidateIf((_, value) => value !== null)
   @IsString({ message: 'structuralSystem must be a string' })
   @MaxLength(120, { message: 'structuralSystem must be at most 120 characters' })
   structuralSystem?: string | null;
 
-  @IsOptional()
+  @IsOmittable()
   @IsArray({ message: 'memberIds must be a list of user ids' })
   @ArrayMinSize(1, { message: 'memberIds must list at least one designer' })
   @ArrayMaxSize(200, { message: 'memberIds must list at most 200 designers' })

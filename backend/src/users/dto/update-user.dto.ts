@@ -1,5 +1,5 @@
 import type { Role, UpdateUserRequest } from '@tiermode/shared-types';
-import { IsBoolean, IsInt, IsOptional, Min } from 'class-validator';
+import { IsBoolean, IsInt, Min } from 'class-validator';
 import { IsAcceptablePassword } from '../password-policy';
 import {
   EmailField,
@@ -8,30 +8,31 @@ import {
   NameField,
   RoleField,
 } from './user-fields';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 export class UpdateUserDto implements UpdateUserRequest {
-  @IsOptional()
+  @IsOmittable()
   @IsInt({ message: 'version must be an integer' })
   @Min(1, { message: 'version must be at least 1' })
   version?: number;
 
-  @IsOptional()
+  @IsOmittable()
   @EmailField()
   email?: string;
 
-  @IsOptional()
+  @IsOmittable()
   @NameField()
   name?: string;
 
-  @IsOptional()
+  @IsOmittable()
   @RoleField()
   role?: Role;
 
-  @IsOptional()
+  @IsOmittable()
   @IsBoolean({ message: 'active must be true or false' })
   active?: boolean;
 
-  @IsOptional()
+  @IsOmittable()
   @IsAcceptablePassword()
   password?: string;
 

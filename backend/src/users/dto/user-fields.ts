@@ -7,11 +7,11 @@ import {
   IsIn,
   IsISO8601,
   IsNotEmpty,
-  IsOptional,
   IsString,
   MaxLength,
   ValidateIf,
 } from 'class-validator';
+import { IsOmittable } from '../../common/validation/is-omittable';
 
 /** Field rules shared by the create and update bodies, with messages that name the field. */
 export const EmailField = () =>
@@ -37,7 +37,7 @@ export const RoleField = () =>
 /** An optional licence text; null (on update) clears it. */
 export const LicenceTextField = (field: string) =>
   applyDecorators(
-    IsOptional(),
+    IsOmittable(),
     Transform(({ value }: { value: unknown }) =>
       typeof value === 'string' ? value.trim() || null : value,
     ),
@@ -48,7 +48,7 @@ export const LicenceTextField = (field: string) =>
 
 export const LicenceExpiryField = () =>
   applyDecorators(
-    IsOptional(),
+    IsOmittable(),
     Transform(({ value }: { value: unknown }) => (value === '' ? null : value)),
     ValidateIf((_, value) => value !== null),
     IsISO8601(

@@ -136,6 +136,20 @@ describe('analyse', () => {
       analyse({ storeys: uniformBuilding(2), spectrum: flat(1), dampingRatio: 1 }),
     ).toThrow(RangeError);
   });
+
+  it('refuses inputs whose results overflow double precision, instead of answering null', () => {
+    // Each value is a legal positive number; SRSS squares a floor force of about 1e300 N.
+    const overflow = /the results overflow double precision/;
+    expect(() =>
+      analyse({ storeys: uniformBuilding(2), spectrum: flat(1e300), dampingRatio: 0.05 }),
+    ).toThrow(overflow);
+    expect(() =>
+      analyse({ storeys: uniformBuilding(2), spectrum: flat(1e160), dampingRatio: 0.05 }),
+    ).toThrow(overflow);
+    expect(() =>
+      analyse({ storeys: uniformBuilding(2), spectrum: flat(1e100), dampingRatio: 0.05 }),
+    ).not.toThrow();
+  });
 });
 
 describe('storeyStiffnessFromColumns (k = sum c E I / h^3; standard beam theory)', () => {

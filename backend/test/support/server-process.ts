@@ -1,0 +1,93 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { join, resolve } from 'node:path';
+
+/**
+ * The built server (backend/dist/main.js) as a child process, as `npm run serve` runs it: for the
+ * browser journeys, the load run and the process tests (crash and two-server tests).
+ */
+export const REPO = resolve(__dirname, '..', '..', '..');
+const MAIN = join(REPO, 'backend', 'dist', 'main.js');
+
+export interface ServerProcess {
+  url: string;
+  port: number;
+  child: ChildProcess;
+  /** Everything the server printed so far. */
+  output: () => string;
+  /** Ends it with SIGTERM (a clean shutdown) and waits for the exit. */
+  stop: () => Promise<void>;
+  /** Ends it with SIGKILL: no shutdown hook runs, as in a crash or a power cut. */
+  kill: () => Promise<void>;
+}
+
+/** A TCP port nothing listens on now. */
+export function freePort(): Promise<number> {
+  return new Promise((done, fail) => {
+    const probe = createServer();
+    probe.once('error', fail);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      probe.close(() => done(typeof address === 'object' && address ? address.port : 0));
+    });
+  });
+}
+
+/** Starts the server on `databasePath` and resolves once /api/health answers 200. */
+export async function startServer(options: {
+  databasePath: string;
+  port?: number;
+  env?: Record<string, string>;
+  timeoutMs?: number;
+}): Promise<ServerProcess> {
+  if (!existsSync(MAIN)) {
+    throw new Error(`Build first: ${MAIN} is missing (npm run build; npm test builds it).`);
+  }
+  const port = options.port ?? (await freePort());
+  let log = '';
+  const child = spawn(process.execPath, [MAIN], {
+    cwd: REPO,
+    env: {
+      ...process.env,
+      PORT: String(port),
+      DATABASE_PATH: options.databasePath,
+      DEMO: 'on',
+      JWT_SECRET: '',
+      ...options.env,
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  child.stdout?.on('data', (chunk: Buffer) => (log += chunk.toString()));
+  child.stderr?.on('data', (chunk: Buffer) => (log += chunk.toString()));
+  const exited = new Promise<void>((done) => child.once('exit', () => done()));
+  const url = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + (options.timeoutMs ?? 30_000);
+  for (;;) {
+    if (child.exitCode !== null || child.signalCode !== null) {
+      throw new Error(`The server exited early:\n${log}`);
+    }
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) break;
+    } catch {
+      // not listening yet
+    }
+    if (Date.now() > deadline) {
+      child.kill('SIGKILL');
+      throw new Error(`The server did not answer /api/health in time:\n${log}`);
+    }
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  const end = async (signal: NodeJS.Signals) => {
+    if (child.exitCode === null && child.signalCode === null) child.kill(signal);
+    await exited;
+  };
+  return {
+    url,
+    port,
+    child,
+    output: () => log,
+    stop: () => end('SIGTERM'),
+    kill: () => end('SIGKILL'),
+  };
+}
