@@ -1,5 +1,5 @@
 // `npm test`: install what is needed, then lint, typecheck, backend unit, backend e2e, frontend
-// unit and browser journeys. Every suite runs even when an earlier one fails; the summary lists
+// unit, the build, backend process tests (crash, two servers, load smoke) and browser journeys. Every suite runs even when an earlier one fails; the summary lists
 // each, and the exit code is non-zero on any failure.
 import { execFileSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
@@ -94,6 +94,16 @@ await step(
   join(reports, 'frontend-unit.json'),
 );
 const built = await step('Build backend and frontend', ['run', 'build']);
+if (built) {
+  // The built server as child processes: crash (SIGKILL) and two-server tests, the load smoke run.
+  await step(
+    'Backend processes',
+    ['run', 'test:processes', '-w', 'backend', '--', ...jestReport('backend-processes')],
+    join(reports, 'backend-processes.json'),
+  );
+} else {
+  results.push({ name: 'Backend processes', ok: false, code: null, tally: null });
+}
 if (built && haveBrowserTools) {
   await step(
     'Browser journeys',

@@ -37,10 +37,10 @@ const http = () => request(app.getHttpServer());
 
 beforeAll(async () => {
   for (const stream of [process.stdout, process.stderr]) {
-    const write = stream.write.bind(stream);
-    jest.spyOn(stream, 'write').mockImplementation((chunk: unknown, ...rest: never[]) => {
-      written.push(String(chunk));
-      return write(chunk as string, ...rest);
+    const write = stream.write.bind(stream) as (...args: unknown[]) => boolean;
+    jest.spyOn(stream, 'write').mockImplementation((...args: unknown[]) => {
+      written.push(String(args[0]));
+      return write(...args);
     });
   }
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();

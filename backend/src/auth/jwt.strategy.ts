@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import { EntityManager } from '@mikro-orm/sqlite';
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
@@ -20,7 +21,12 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: config.get('jwtSecret', { infer: true }),
+      // A KeyObject made once: given a string, jsonwebtoken 9 first tries to read it as a public
+      // key (and fails) on every request, a tenth of the server's time under load. Its types
+      // say string | Buffer; jsonwebtoken takes a KeyObject as well.
+      secretOrKey: createSecretKey(
+        new TextEncoder().encode(config.get('jwtSecret', { infer: true })),
+      ) as unknown as Buffer,
       algorithms: [JWT_ALGORITHM],
       issuer: JWT_ISSUER,
       audience: JWT_AUDIENCE,

@@ -10,6 +10,7 @@ import { calculationSubject, isAnalysisStale } from './calculation.mapper';
 import type { ListCalculationsDto } from './dto/list-calculations.dto';
 
 const POPULATE = ['project.members', 'author', 'reviewer'] as const;
+const LARGE_COLUMNS = ['analysis', 'checks'] as const;
 
 /** The lists of calcs: the firm-wide list behind the dashboard and project pages, and the library. */
 @Injectable()
@@ -32,7 +33,13 @@ export class CalculationListsService {
     const calcs = await this.em.find(
       Calculation,
       { $and: parts },
-      { populate: POPULATE, orderBy: { updatedAt: 'desc' }, limit: query.limit ?? 100 },
+      {
+        populate: POPULATE,
+        // A summary needs none of the results: leave the large JSON columns unread.
+        exclude: LARGE_COLUMNS,
+        orderBy: { updatedAt: 'desc' },
+        limit: query.limit ?? 100,
+      },
     );
     return calcs
       .filter((c) => ability.can('read', subject('Calculation', calculationSubject(c))))
@@ -61,7 +68,7 @@ export class CalculationListsService {
     const calcs = await this.em.find(
       Calculation,
       { $and: [{ status: { $in: ['locked', 'superseded'] } }, where] },
-      { populate: POPULATE, orderBy: { lockedAt: 'desc' } },
+      { populate: POPULATE, exclude: LARGE_COLUMNS, orderBy: { lockedAt: 'desc' } },
     );
     return calcs
       .filter((c) => c.seal && ability.can('read', subject('Calculation', calculationSubject(c))))

@@ -65,12 +65,16 @@ export function toAttachmentDto(a: Attachment): AttachmentDto {
 }
 
 /** True when the inputs changed after the stored analysis was made (or none was made). */
-export function isAnalysisStale(calc: Calculation): boolean {
+export function isAnalysisStale(
+  calc: Pick<Calculation, 'analysedAt' | 'inputsChangedAt'>,
+): boolean {
   return calc.analysedAt === null || calc.analysedAt < calc.inputsChangedAt;
 }
 
 /** The plain record CASL's conditions are checked against. */
-export function calculationSubject(calc: Calculation): CalculationRecord {
+export function calculationSubject(
+  calc: Pick<Calculation, 'id' | 'status' | 'author' | 'project'>,
+): CalculationRecord {
   return {
     id: calc.id,
     status: calc.status,

@@ -1,13 +1,13 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { join, resolve } from 'node:path';
+import { dirname, join } from 'node:path';
 
 /**
  * The built server (backend/dist/main.js) as a child process, as `npm run serve` runs it: for the
  * browser journeys, the load run and the process tests (crash and two-server tests).
  */
-export const REPO = resolve(__dirname, '..', '..', '..');
+export const REPO = findRepo(process.cwd());
 const MAIN = join(REPO, 'backend', 'dist', 'main.js');
 
 export interface ServerProcess {
@@ -90,4 +90,21 @@ export async function startServer(options: {
     stop: () => end('SIGTERM'),
     kill: () => end('SIGKILL'),
   };
+}
+
+/**
+ * The repository root, found upwards from the working directory (this file is loaded both as
+ * CommonJS by Jest and as an ES module by Vitest, so neither __dirname nor import.meta serves).
+ */
+function findRepo(from: string): string {
+  for (let dir = from; ; dir = dirname(dir)) {
+    const manifest = join(dir, 'package.json');
+    if (
+      existsSync(manifest) &&
+      (JSON.parse(readFileSync(manifest, 'utf8')) as { name?: string }).name === 'tiermode'
+    ) {
+      return dir;
+    }
+    if (dirname(dir) === dir) throw new Error(`Not inside the Tiermode repository: ${from}`);
+  }
 }
