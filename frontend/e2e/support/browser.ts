@@ -33,8 +33,11 @@ export async function launchBrowser(): Promise<Browser> {
  */
 export async function newPage(
   browser: Browser,
+  options: { bypassCSP?: boolean } = {},
 ): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
   const context = await browser.newContext({
+    // Only for injecting axe-core; every other journey runs under the app's real CSP.
+    bypassCSP: options.bypassCSP ?? false,
     baseURL: inject('baseURL'),
     viewport: { width: 1366, height: 860 },
   });

@@ -5,6 +5,10 @@ export const theme = createTheme({
   palette: {
     primary: { main: '#23465f', contrastText: '#ffffff' },
     secondary: { main: '#9a5b12', contrastText: '#ffffff' },
+    // MUI's stock info (#0288d1) and warning (#ed6c02) carry white text below the 4.5:1 contrast
+    // WCAG 2.1 AA asks of small text (1.4.3); these darker shades reach it.
+    info: { main: '#0b5c8a', contrastText: '#ffffff' },
+    warning: { main: '#a34700', contrastText: '#ffffff' },
     background: { default: '#f5f6f4', paper: '#ffffff' },
   },
   shape: { borderRadius: 6 },

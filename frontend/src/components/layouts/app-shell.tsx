@@ -4,6 +4,7 @@ import {
   Button,
   Drawer,
   List,
+  ListItem,
   ListItemButton,
   ListItemIcon,
   ListItemText,
@@ -61,16 +62,18 @@ export function AppShell({ entries, userName, roleLabel, onSignOut, children }: 
         <Box component="nav" aria-label="Main">
           <List>
             {entries.map((entry) => (
-              <ListItemButton
-                key={entry.to}
-                component={NavLink}
-                to={entry.to}
-                end={entry.to === '/'}
-                sx={{ '&.active': { bgcolor: 'action.selected', fontWeight: 500 } }}
-              >
-                <ListItemIcon sx={{ minWidth: 40 }}>{entry.icon}</ListItemIcon>
-                <ListItemText primary={entry.label} />
-              </ListItemButton>
+              // Each link in its own <li>: a list holds list items only (screen readers count them).
+              <ListItem key={entry.to} disablePadding>
+                <ListItemButton
+                  component={NavLink}
+                  to={entry.to}
+                  end={entry.to === '/'}
+                  sx={{ '&.active': { bgcolor: 'action.selected', fontWeight: 500 } }}
+                >
+                  <ListItemIcon sx={{ minWidth: 40 }}>{entry.icon}</ListItemIcon>
+                  <ListItemText primary={entry.label} />
+                </ListItemButton>
+              </ListItem>
             ))}
           </List>
         </Box>

@@ -16,7 +16,9 @@ export function SpectrumChart({ spectrum, modes }: SpectrumChartProps) {
       role="img"
       aria-label="Design spectrum: Sa against period, with the modal periods marked"
     >
+      {/* The wrapper (role img, labelled) speaks for the canvas. */}
       <Scatter
+        aria-hidden
         options={{
           ...STATIC_CHART,
           scales: {

@@ -151,7 +151,9 @@ export function ChecksResults({
           role="img"
           aria-label="Design drift ratio against elevation, with the limit"
         >
+          {/* The wrapper (role img, labelled) speaks for the canvas. */}
           <Scatter
+            aria-hidden
             options={{
               ...STATIC_CHART,
               scales: {

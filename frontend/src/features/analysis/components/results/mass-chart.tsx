@@ -12,7 +12,9 @@ export function MassChart({ modes }: { modes: ModeResult[] }) {
       role="img"
       aria-label="Effective modal mass by mode, with the cumulative mass ratio"
     >
+      {/* The wrapper (role img, labelled) speaks for the canvas. */}
       <Chart
+        aria-hidden
         type="bar"
         options={{
           ...STATIC_CHART,

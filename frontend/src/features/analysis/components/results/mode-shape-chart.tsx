@@ -20,7 +20,9 @@ export function ModeShapeChart({ modes, elevations, units }: Props) {
       role="img"
       aria-label="Mode shapes, normalised to 1 at the roof, against elevation"
     >
+      {/* The wrapper (role img, labelled) speaks for the canvas. */}
       <Scatter
+        aria-hidden
         options={{
           ...STATIC_CHART,
           scales: {

@@ -63,7 +63,9 @@ export function ResponseProfiles({ result, elevations, units }: Props) {
               role="img"
               aria-label={`${profile.title} against elevation: SRSS, CQC and ABS`}
             >
+              {/* The wrapper (role img, labelled) speaks for the canvas. */}
               <Scatter
+                aria-hidden
                 options={{
                   ...STATIC_CHART,
                   scales: {
