@@ -17,6 +17,16 @@ interface AxeViolation {
  * context must be made with `bypassCSP: true`, since axe is injected as a script of its own.
  */
 export async function expectAccessible(page: Page, what: string): Promise<void> {
+  // A dialog fading in is half transparent: contrast is judged once every transition has ended.
+  // (Endless ones, a progress bar's, are left alone; a cancelled one counts as ended.)
+  await page.evaluate(() =>
+    Promise.all(
+      document
+        .getAnimations()
+        .filter((a) => a.effect?.getComputedTiming().endTime !== Infinity)
+        .map((a) => a.finished.catch(() => undefined)),
+    ),
+  );
   await page.addScriptTag({ path: axePath });
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run: (...a: unknown[]) => Promise<unknown> } }).axe;
