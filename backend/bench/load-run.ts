@@ -139,9 +139,9 @@ export async function runLoad(baseUrl: string, options: LoadOptions): Promise<Lo
     email: 'reviewer@tiermode.test',
     password: DEMO_PASSWORD,
   });
-  // One connection signs someone in once a second (far above an office's rate, to show its
-  // cost: a password hash at cost 12 in pure JavaScript takes a few hundred ms of the server's
-  // one JavaScript thread); the rest are people at work, as fast as the server answers.
+  // One connection signs someone in once a second (far above an office's rate; each sign-in is
+  // a bcrypt hash at cost 12, a few hundred ms of CPU on a worker thread); the rest are people
+  // at work, as fast as the server answers.
   const [workload, signIns] = await Promise.all([
     run({
       ...common,

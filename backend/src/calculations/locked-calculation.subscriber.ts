@@ -27,8 +27,9 @@ function check(changeSet: ChangeSet<Calculation>): void {
   }
   if (changeSet.type !== ChangeSetType.UPDATE || !before) return;
   if (status !== 'locked' && status !== 'superseded') return;
-  // MikroORM 6 on SQLite lists datetime properties in the payload even when their stored value
-  // is unchanged; only values that really differ from the stored ones count.
+  // Only values that really differ from the stored ones count. (MikroORM 6 on SQLite once listed
+  // unchanged dates in every payload, with `type: 'datetime'`; the entities now declare
+  // DateTimeType, and this comparison stays so that such a payload could never pass for a change.)
   const payload = changeSet.payload as Record<string, unknown>;
   const changed = Object.keys(payload).filter(
     (key) =>
