@@ -91,10 +91,13 @@ describe('Keyboard only (designer)', () => {
       await page.keyboard.press('ArrowRight');
     }
     expect((await activeCell(page))?.field).toBe('actions');
+    // The grid hands the focus to the cell's first action once it has rendered.
+    await expect.poll(() => focusedName(page)).toBe('Stiffness of storey 2 from its columns');
     await page.keyboard.press('ArrowRight'); // from "stiffness from columns" to "insert below"
     await expect.poll(() => focusedName(page)).toBe('Insert a storey below storey 2');
     await page.keyboard.press('Enter');
     await expect.poll(() => rowCount(page)).toBe(before + 1);
+    await expect.poll(() => focusedName(page)).toMatch(/^Insert a storey below storey \d+$/);
     await page.keyboard.press('ArrowRight'); // "delete"
     await expect.poll(() => focusedName(page)).toMatch(/^Delete storey \d+$/);
     await page.keyboard.press('Enter');
@@ -127,6 +130,8 @@ describe('Keyboard only (designer)', () => {
     await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
     await tabTo(page, /^Projects$/);
     await page.keyboard.press('Enter');
+    // Wait (without touching anything) for the list to load, so no re-render moves the focus.
+    await page.getByRole('grid').getByRole('link').first().waitFor();
     await tabTo(page, /new project/i);
     await page.keyboard.press('Enter');
     await page.getByRole('dialog').waitFor();
