@@ -1,32 +1,13 @@
 import { MikroORM } from '@mikro-orm/sqlite';
 import type { AnalysisResponse, ChecksResponse } from '@tiermode/shared-types';
-import { sampleInputs, useSignedInApp } from './support/fixtures';
+import {
+  ASCE_BASIS as ASCE,
+  EN_BASIS as EN,
+  sampleInputs,
+  useSignedInApp,
+} from './support/fixtures';
 
 const { state, http, as } = useSignedInApp();
-
-const ASCE = {
-  code: 'ASCE7-22',
-  sds: 1.0,
-  sd1: 0.6,
-  s1: 0.6,
-  tl: 8,
-  r: 8,
-  cd: 5.5,
-  ie: 1.0,
-  ct: 0.0466,
-  x: 0.9,
-  riskCategory: 'II',
-};
-const EN = {
-  code: 'EN1998-1',
-  ag: 0.25,
-  groundType: 'C',
-  spectrumType: 1,
-  importanceFactor: 1,
-  q: 3.9,
-  nu: 0.5,
-  driftLimitClass: 'ductile',
-};
 
 const checks = (basis: object, extra: object = {}) =>
   http()

@@ -1,6 +1,11 @@
 import type { AnalysisRequest, AnalysisResponse, CalculationDto } from '@tiermode/shared-types';
 import fc from 'fast-check';
-import { sampleInputs, useSignedInApp } from './support/fixtures';
+import {
+  ASCE_BASIS as ASCE,
+  EN_BASIS as EN,
+  sampleInputs,
+  useSignedInApp,
+} from './support/fixtures';
 
 /**
  * Property-based: generated payloads (valid, boundary and malformed) against POST /api/analysis,
@@ -315,29 +320,6 @@ describe('POST /api/analysis, with generated payloads', () => {
   });
 });
 
-const ASCE = {
-  code: 'ASCE7-22',
-  sds: 1.0,
-  sd1: 0.6,
-  s1: 0.6,
-  tl: 8,
-  r: 8,
-  cd: 5.5,
-  ie: 1.0,
-  ct: 0.0466,
-  x: 0.9,
-  riskCategory: 'II',
-};
-const EN = {
-  code: 'EN1998-1',
-  ag: 0.25,
-  groundType: 'C',
-  spectrumType: 1,
-  importanceFactor: 1,
-  q: 3.9,
-  nu: 0.5,
-  driftLimitClass: 'ductile',
-};
 const basis = fc.oneof(
   fc
     .record({

@@ -26,6 +26,16 @@ async function tabTo(page: Page, name: RegExp, limit = 60): Promise<void> {
   throw new Error(`Tab never reached ${name}; last focus: ${await focusedName(page)}`);
 }
 
+async function signInByKeyboard(page: Page): Promise<void> {
+  await page.goto('/sign-in');
+  await tabTo(page, /^Email/);
+  await page.keyboard.type('designer@tiermode.test');
+  await tabTo(page, /^Password/);
+  await page.keyboard.type(DEMO_PASSWORD);
+  await page.keyboard.press('Enter');
+  await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+}
+
 const activeCell = (page: Page) =>
   page.evaluate(() => {
     const el = document.activeElement?.closest('[role="gridcell"], [role="columnheader"]');
@@ -50,13 +60,7 @@ describe('Keyboard only (designer)', () => {
 
   it('signs in, reaches the storey table, edits a mass, adds and deletes a storey, and uses a dialog', async () => {
     const { page, close } = await newPage(browser);
-    await page.goto('/sign-in');
-    await tabTo(page, /^Email/);
-    await page.keyboard.type('designer@tiermode.test');
-    await tabTo(page, /^Password/);
-    await page.keyboard.type(DEMO_PASSWORD);
-    await page.keyboard.press('Enter');
-    await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+    await signInByKeyboard(page);
 
     await tabTo(page, /^Quick analysis$/);
     await page.keyboard.press('Enter');
@@ -121,13 +125,7 @@ describe('Keyboard only (designer)', () => {
 
   it('creates a project through its dialog by keyboard alone', async () => {
     const { page, close } = await newPage(browser);
-    await page.goto('/sign-in');
-    await tabTo(page, /^Email/);
-    await page.keyboard.type('designer@tiermode.test');
-    await tabTo(page, /^Password/);
-    await page.keyboard.type(DEMO_PASSWORD);
-    await page.keyboard.press('Enter');
-    await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+    await signInByKeyboard(page);
     await tabTo(page, /^Projects$/);
     await page.keyboard.press('Enter');
     // Wait (without touching anything) for the list to load, so no re-render moves the focus.

@@ -24,6 +24,35 @@ export function sampleInputs(): CalculationInputs {
   };
 }
 
+/**
+ * Code bases for the invented three-storey building (invented values, within the ranges the
+ * standards allow): ASCE 7-22 with a steel moment frame's R, Cd, Ct and x, and EN 1998-1 on
+ * ground type C.
+ */
+export const ASCE_BASIS = {
+  code: 'ASCE7-22',
+  sds: 1.0,
+  sd1: 0.6,
+  s1: 0.6,
+  tl: 8,
+  r: 8,
+  cd: 5.5,
+  ie: 1.0,
+  ct: 0.0466,
+  x: 0.9,
+  riskCategory: 'II',
+};
+export const EN_BASIS = {
+  code: 'EN1998-1',
+  ag: 0.25,
+  groundType: 'C',
+  spectrumType: 1,
+  importanceFactor: 1,
+  q: 3.9,
+  nu: 0.5,
+  driftLimitClass: 'ductile',
+};
+
 /** A supertest parser that keeps a binary body (an XLSX or a PDF) as one Buffer. */
 export const binaryBody: Parameters<request.Test['parse']>[0] = (res, done) => {
   const chunks: Buffer[] = [];
