@@ -1,15 +1,23 @@
 import { BadRequestException, ValidationPipe } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import helmet from 'helmet';
-import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import type { NextFunction, Request, Response } from 'express';
+import { ApiExceptionFilter, errorBody } from './common/filters/api-exception.filter';
+import { RefusedFieldError } from './common/validation/refused-field-error';
+import { ControlCharactersPipe } from './common/validation/control-characters.pipe';
 import { formatValidationErrors } from './common/validation/format-validation-errors';
 import { setupOpenApi } from './openapi/openapi';
 
 /** What main.ts and the e2e tests both apply to the app, so tests see what users get. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
-  // Keys that could reach an object's prototype are refused while the JSON is parsed.
-  app.useBodyParser('json', { reviver: refusePrototypeKeys });
+  // Keys that could reach an object's prototype are refused while the JSON is parsed. Both
+  // parsers are set here, so Nest adds none of its own after the error handler below.
+  app.useBodyParser('json', { reviver: refusePrototypeKeys, limit: JSON_BODY_LIMIT });
+  app.useBodyParser('urlencoded', { extended: false, limit: '100kb' });
+  // A body that cannot be parsed is answered here, in the API's error shape. Left to Express,
+  // the web app's static-file handler would answer it "404 Cannot POST".
+  app.use(answerBodyParserErrors);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -22,6 +30,7 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
     }),
   );
   app.useGlobalPipes(
+    new ControlCharactersPipe(),
     new ValidationPipe({
       whitelist: true,
       forbidNonWhitelisted: true,
@@ -36,11 +45,27 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   return app;
 }
 
+/**
+ * The largest request the API accepts (500 labelled storeys with per-level weights, 1,000
+ * spectrum points, a code basis and every optional field, numbers at full precision) is about
+ * 200 KB; 1 MB leaves room for indented JSON.
+ */
+export const JSON_BODY_LIMIT = 1024 * 1024;
+
 const PROTOTYPE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 
 function refusePrototypeKeys(key: string, value: unknown): unknown {
-  if (PROTOTYPE_KEYS.has(key)) {
-    throw new SyntaxError(`The request has a field named "${key}", which is not allowed`);
-  }
+  if (PROTOTYPE_KEYS.has(key)) throw new RefusedFieldError(key);
   return value;
+}
+
+function answerBodyParserErrors(
+  error: unknown,
+  _request: Request,
+  response: Response,
+  next: NextFunction,
+): void {
+  if (response.headersSent) return next(error);
+  const body = errorBody(error);
+  response.status(body.statusCode).json(body);
 }

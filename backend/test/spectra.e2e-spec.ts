@@ -1,6 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import type { App } from 'supertest/types';
+import { ANALYSIS_LIMITS } from '@tiermode/shared-types';
 import { createTestApp, tokenFor } from './support/test-app';
 
 describe('POST /api/spectra/generate', () => {
@@ -77,9 +78,49 @@ describe('POST /api/spectra/generate', () => {
       'q must be a positive number (behaviour factor)',
     ],
     [{ kind: 'mystery' }, 'kind must be one of: asce7-two-period, en1998-elastic, en1998-design'],
+    // Unbounded periods once held the server for seconds and, larger, ran it out of memory.
+    [{ kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 1e9 }, 'tl must be at most 50 (s)'],
+    [
+      { kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 8, maxPeriod: 1e6 },
+      'maxPeriod must be at most 100 (s)',
+    ],
+    [
+      { kind: 'en1998-elastic', agR: 0.2, groundType: 'A', spectrumType: 1, maxPeriod: 1e300 },
+      'maxPeriod must be at most 100 (s)',
+    ],
+    [
+      { kind: 'en1998-design', agR: 1e9, groundType: 'A', spectrumType: 1, q: 4 },
+      'agR must be at most 10 (g)',
+    ],
+    [
+      { kind: 'en1998-elastic', agR: 0.2, groundType: 'A', spectrumType: 1, dampingPercent: 1e9 },
+      'dampingPercent must be at most 100 (%)',
+    ],
   ])('refuses %j with 400 naming the field', async (body, message) => {
     const res = await post(body).expect(400);
     expect(res.body.message).toContain(message);
+  });
+
+  it('answers the longest tables it allows at once, within the analysis point limit', async () => {
+    const asce = await post({
+      kind: 'asce7-two-period',
+      sds: 1,
+      sd1: 0.6,
+      tl: 50,
+      maxPeriod: 100,
+    }).expect(200);
+    const en = await post({
+      kind: 'en1998-design',
+      agR: 0.3,
+      groundType: 'B',
+      spectrumType: 1,
+      q: 4,
+      maxPeriod: 100,
+    }).expect(200);
+    for (const table of [asce.body.points, en.body.points] as { period: number }[][]) {
+      expect(table.length).toBeLessThanOrEqual(ANALYSIS_LIMITS.maxSpectrumPoints);
+      expect(table.at(-1)?.period).toBe(100);
+    }
   });
 });
 

@@ -34,6 +34,24 @@ export const ANALYSIS_LIMITS = {
   maxSpectrumPoints: 1000,
 } as const;
 
+/**
+ * Bounds on the design spectrum generators' parameters. They keep each table within the
+ * analysis's point limit (and the work bounded) and refuse values no site has: mapped TL reaches
+ * 16 s (ASCE 7-22 Figures 22-14 to 22-17, from memory), ag and SDS stay well under 10 g.
+ */
+export const SPECTRUM_GENERATOR_LIMITS = {
+  /** Last period of a generated table, s. */
+  maxPeriod: 100,
+  /** ASCE 7 long-period transition TL, s. */
+  tl: 50,
+  /** SDS, SD1 and agR, g. */
+  acceleration: 10,
+  importanceFactor: 5,
+  q: 20,
+  beta: 1,
+  dampingPercent: 100,
+} as const;
+
 export interface AnalysisRequest {
   storeys: StoreyInput[];
   spectrum: SpectrumInput;

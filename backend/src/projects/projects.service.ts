@@ -10,6 +10,7 @@ import type { ProjectDto, ProjectMemberDto } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { User } from '../users/user.entity';
 import type { CreateProjectDto, UpdateProjectDto } from './dto/project.dto';
+import { Calculation } from '../calculations/calculation.entity';
 import { Project } from './project.entity';
 import { projectSubject, toProjectDto } from './project.mapper';
 
@@ -105,6 +106,14 @@ export class ProjectsService {
       'delete',
       subject('Project', projectSubject(project)),
     );
+    // Checked first for a message that says why; the foreign key refuses it at the same time
+    // (answered 409 too), so a calc created meanwhile is never orphaned.
+    const calculations = await this.em.count(Calculation, { project });
+    if (calculations > 0) {
+      throw new ConflictException(
+        `This project holds ${calculations} calculation${calculations === 1 ? '' : 's'}, so it cannot be deleted; calcs are kept for the record`,
+      );
+    }
     await this.em.remove(project).flush();
   }
 

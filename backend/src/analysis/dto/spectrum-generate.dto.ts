@@ -1,17 +1,19 @@
-import type {
-  GroundType,
-  SpectrumGenerateRequest,
-  SpectrumGeneratorKind,
+import {
+  SPECTRUM_GENERATOR_LIMITS as LIMITS,
+  type GroundType,
+  type SpectrumGenerateRequest,
+  type SpectrumGeneratorKind,
 } from '@tiermode/shared-types';
-import { IsIn, IsNumber, IsPositive, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsNumber, IsPositive, Max, Min, ValidateIf } from 'class-validator';
 import { IsOmittable } from '../../common/validation/is-omittable';
 
 const FINITE = { allowNaN: false, allowInfinity: false };
 const asce = (o: SpectrumGenerateDto) => o.kind === 'asce7-two-period';
 const en = (o: SpectrumGenerateDto) => o.kind === 'en1998-elastic' || o.kind === 'en1998-design';
-const positiveNumber = (field: string, unit: string) => [
+const positiveNumber = (field: string, unit: string, max: number) => [
   IsNumber(FINITE, { message: `${field} must be a number (${unit})` }),
   IsPositive({ message: `${field} must be a positive number (${unit})` }),
+  Max(max, { message: `${field} must be at most ${max} (${unit})` }),
 ];
 const apply =
   (...decorators: PropertyDecorator[]): PropertyDecorator =>
@@ -25,23 +27,23 @@ export class SpectrumGenerateDto implements SpectrumGenerateRequest {
   kind!: SpectrumGeneratorKind;
 
   @ValidateIf(asce)
-  @apply(...positiveNumber('sds', 'g'))
+  @apply(...positiveNumber('sds', 'g', LIMITS.acceleration))
   sds?: number;
 
   @ValidateIf(asce)
-  @apply(...positiveNumber('sd1', 'g'))
+  @apply(...positiveNumber('sd1', 'g', LIMITS.acceleration))
   sd1?: number;
 
   @ValidateIf(asce)
-  @apply(...positiveNumber('tl', 's'))
+  @apply(...positiveNumber('tl', 's', LIMITS.tl))
   tl?: number;
 
   @ValidateIf(en)
-  @apply(...positiveNumber('agR', 'g'))
+  @apply(...positiveNumber('agR', 'g', LIMITS.acceleration))
   agR?: number;
 
   @IsOmittable()
-  @apply(...positiveNumber('importanceFactor', 'gamma_I'))
+  @apply(...positiveNumber('importanceFactor', 'gamma_I', LIMITS.importanceFactor))
   importanceFactor?: number;
 
   @ValidateIf(en)
@@ -55,17 +57,20 @@ export class SpectrumGenerateDto implements SpectrumGenerateRequest {
   @IsOmittable()
   @IsNumber(FINITE, { message: 'dampingPercent must be a number (%)' })
   @Min(0, { message: 'dampingPercent must be a number >= 0 (%)' })
+  @Max(LIMITS.dampingPercent, {
+    message: `dampingPercent must be at most ${LIMITS.dampingPercent} (%)`,
+  })
   dampingPercent?: number;
 
   @ValidateIf((o: SpectrumGenerateDto) => o.kind === 'en1998-design')
-  @apply(...positiveNumber('q', 'behaviour factor'))
+  @apply(...positiveNumber('q', 'behaviour factor', LIMITS.q))
   q?: number;
 
   @IsOmittable()
-  @apply(...positiveNumber('beta', 'lower-bound factor'))
+  @apply(...positiveNumber('beta', 'lower-bound factor', LIMITS.beta))
   beta?: number;
 
   @IsOmittable()
-  @apply(...positiveNumber('maxPeriod', 's'))
+  @apply(...positiveNumber('maxPeriod', 's', LIMITS.maxPeriod))
   maxPeriod?: number;
 }

@@ -1,4 +1,4 @@
-import type { GroundType } from '@tiermode/shared-types';
+import { SPECTRUM_GENERATOR_LIMITS, type GroundType } from '@tiermode/shared-types';
 import type { SpectrumPoint } from './spectrum';
 
 /**
@@ -24,6 +24,14 @@ function positive(name: string, value: number): void {
     throw new RangeError(`${name} must be a positive number`);
 }
 
+/** The table's last period: bounded, so the number of samples (and the work) is too. */
+function lastPeriod(value: number): number {
+  positive('maxPeriod', value);
+  const limit = SPECTRUM_GENERATOR_LIMITS.maxPeriod;
+  if (value > limit) throw new RangeError(`maxPeriod must be at most ${limit} s`);
+  return value;
+}
+
 export interface Asce7TwoPeriodInput {
   /** SDS, g */
   sds: number;
@@ -46,11 +54,13 @@ export function asce7TwoPeriodSpectrum(input: Asce7TwoPeriodInput): SpectrumPoin
   positive('sds', sds);
   positive('sd1', sd1);
   positive('tl', tl);
+  if (tl > SPECTRUM_GENERATOR_LIMITS.tl) {
+    throw new RangeError(`tl must be at most ${SPECTRUM_GENERATOR_LIMITS.tl} s`);
+  }
   const ts = sd1 / sds;
   const t0 = 0.2 * ts;
   if (tl <= ts) throw new RangeError('tl must be longer than Ts = SD1/SDS');
-  const maxPeriod = input.maxPeriod ?? Math.max(10, tl + 2);
-  positive('maxPeriod', maxPeriod);
+  const maxPeriod = lastPeriod(input.maxPeriod ?? Math.max(10, tl + 2));
   if (maxPeriod <= ts) throw new RangeError('maxPeriod must be longer than Ts = SD1/SDS');
   const sa = (t: number) =>
     t < t0 ? sds * (0.4 + (0.6 * t) / t0) : t <= ts ? sds : t <= tl ? sd1 / t : (sd1 * tl) / t ** 2;
@@ -102,8 +112,7 @@ function groundParameters(input: En1998Input) {
   positive('agR', input.agR);
   const importance = input.importanceFactor ?? 1;
   positive('importanceFactor', importance);
-  const maxPeriod = input.maxPeriod ?? 4;
-  positive('maxPeriod', maxPeriod);
+  const maxPeriod = lastPeriod(input.maxPeriod ?? 4);
   const [s, tb, tc, td] = row;
   return { ag: importance * input.agR, s, tb, tc, td, maxPeriod };
 }

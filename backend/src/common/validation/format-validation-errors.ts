@@ -35,7 +35,8 @@ function rewrite(message: string, property: string, path: string): string {
   return `${label}: ${message}`;
 }
 
-function labelOf(path: string): string {
+/** A field path as people read it: `storeys[3].mass (storey 4)`. */
+export function labelOf(path: string): string {
   for (const [pattern, noun] of ITEM_NAMES) {
     const match = pattern.exec(path);
     if (match) return `${path} (${noun} ${Number(match[1]) + 1})`;

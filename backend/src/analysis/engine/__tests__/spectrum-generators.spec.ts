@@ -92,3 +92,17 @@ describe('EN 1998-1:2004 spectra', () => {
     ).toThrow('spectrumType must be 1 or 2');
   });
 });
+
+describe('generator bounds', () => {
+  it('refuses periods past the limits before sampling anything', () => {
+    expect(() => asce7TwoPeriodSpectrum({ sds: 1, sd1: 0.6, tl: 1e9 })).toThrow(
+      new RangeError('tl must be at most 50 s'),
+    );
+    expect(() => asce7TwoPeriodSpectrum({ sds: 1, sd1: 0.6, tl: 8, maxPeriod: 1e17 })).toThrow(
+      new RangeError('maxPeriod must be at most 100 s'),
+    );
+    expect(() =>
+      en1998ElasticSpectrum({ agR: 0.2, groundType: 'A', spectrumType: 1, maxPeriod: 101 }),
+    ).toThrow(new RangeError('maxPeriod must be at most 100 s'));
+  });
+});
