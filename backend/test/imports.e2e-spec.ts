@@ -1,4 +1,5 @@
 import JSZip from 'jszip';
+import { lyingZipBomb } from './support/zip-bomb';
 import type { StoreyImportResponse } from '@tiermode/shared-types';
 import { binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
 
@@ -133,6 +134,15 @@ describe('POST /api/imports/storeys', () => {
     const c = await upload(packed, 'storeys.xlsx');
     expect(c.status).toBe(400);
     expect(messages(c.body)).toContain('would unpack to more than 25 MB');
+
+    // A directory that lies about the sizes once let 1.9 MB inflate to gigabytes in exceljs.
+    const lying = await lyingZipBomb(300);
+    expect(lying.length).toBeLessThan(2 * 1024 * 1024);
+    const d = await upload(lying, 'storeys.xlsx');
+    expect(d.status).toBe(400);
+    expect(messages(d.body)).toContain(
+      'file has a part larger than its directory says: it is not a storey table',
+    );
   });
 
   it('refuses unknown units, a missing file and a second file', async () => {

@@ -1,6 +1,3 @@
-import { BadRequestException } from '@nestjs/common';
-import * as yauzl from 'yauzl';
-
 export type FileKind = 'xlsx' | 'pdf' | 'png' | 'jpeg' | 'text' | 'unknown';
 
 /**
@@ -23,44 +20,6 @@ export function detectKind(bytes: Buffer): FileKind {
     return 'text';
   } catch {
     return 'unknown';
-  }
-}
-
-export const XLSX_LIMITS = { entries: 500, uncompressedBytes: 25 * 1024 * 1024 };
-
-/**
- * Reads an XLSX package's central directory, before anything is unpacked, and refuses it when
- * it has too many entries or would unpack to too much (a zip bomb), or is not a workbook.
- */
-export async function inspectXlsx(bytes: Buffer): Promise<void> {
-  const refuse = (why: string) => new BadRequestException([`file ${why}`]);
-  const zip = await new Promise<yauzl.ZipFile>((resolve, reject) =>
-    yauzl.fromBuffer(bytes, { lazyEntries: true, validateEntrySizes: true }, (error, file) =>
-      error || !file ? reject(refuse('is not a readable XLSX workbook')) : resolve(file),
-    ),
-  );
-  const names: string[] = [];
-  let total = 0;
-  await new Promise<void>((resolve, reject) => {
-    zip.on('entry', (entry: yauzl.Entry) => {
-      names.push(entry.fileName);
-      total += entry.uncompressedSize;
-      if (names.length > XLSX_LIMITS.entries) {
-        zip.close();
-        reject(refuse(`has more than ${XLSX_LIMITS.entries} parts: it is not a storey table`));
-      } else if (total > XLSX_LIMITS.uncompressedBytes) {
-        zip.close();
-        reject(refuse('would unpack to more than 25 MB: it is not a storey table'));
-      } else {
-        zip.readEntry();
-      }
-    });
-    zip.on('end', () => resolve());
-    zip.on('error', () => reject(refuse('is not a readable XLSX workbook')));
-    zip.readEntry();
-  });
-  if (!names.includes('xl/workbook.xml') || !names.includes('[Content_Types].xml')) {
-    throw refuse('is a ZIP archive but not an XLSX workbook');
   }
 }
 

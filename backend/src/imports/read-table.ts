@@ -1,7 +1,8 @@
 import { BadRequestException } from '@nestjs/common';
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
-import { detectKind, inspectXlsx } from './file-checks';
+import { detectKind } from './file-checks';
+import { unpackXlsx } from './xlsx-package';
 
 /**
  * The cells of an uploaded table as text, whichever format it came in: CSV (papaparse; comma,
@@ -18,10 +19,10 @@ export async function readTable(bytes: Buffer): Promise<string[][]> {
     return parsed.data.map((row) => row.map((cell) => String(cell ?? '')));
   }
   if (kind === 'xlsx') {
-    await inspectXlsx(bytes);
+    const unpacked = await unpackXlsx(bytes);
     const workbook = new ExcelJS.Workbook();
     try {
-      await workbook.xlsx.load(bytes as unknown as ExcelJS.Buffer);
+      await workbook.xlsx.load(unpacked as unknown as ExcelJS.Buffer);
     } catch {
       throw new BadRequestException(['file is not a readable XLSX workbook']);
     }
