@@ -8,7 +8,7 @@ export default defineConfig({
   server: {
     port: 5173,
     // `npm run dev`: the API runs on its own port under watch.
-    proxy: { '/api': { target: `http://localhost:${process.env.PORT ?? 3000}` } },
+    proxy: { '/api': { target: `http://127.0.0.1:${process.env.PORT ?? 3000}` } },
   },
   build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 2000 },
   test: {

@@ -18,6 +18,7 @@ import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
 import { MailModule } from './mail/mail.module';
 import { ProjectsModule } from './projects/projects.module';
+import { RateLimitModule } from './rate-limit/rate-limit.module';
 import { ReportsModule } from './reports/reports.module';
 import { UsersModule } from './users/users.module';
 import { VerificationModule } from './verification/verification.module';
@@ -43,6 +44,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     VerificationModule,
     HealthModule,
     MailModule,
+    RateLimitModule,
     ...webApp,
   ],
   providers: [

@@ -9,9 +9,14 @@ import type { AppEnvironment } from './config/environment';
 
 async function bootstrap(): Promise<void> {
   const app = configureApp(await NestFactory.create<NestExpressApplication>(AppModule));
-  const port = app.get(ConfigService<AppEnvironment, true>).get('port', { infer: true });
-  await app.listen(port);
-  Logger.log(`Tiermode is serving on http://localhost:${port}`, 'Bootstrap');
+  const config = app.get(ConfigService<AppEnvironment, true>);
+  const port = config.get('port', { infer: true });
+  const host = config.get('host', { infer: true });
+  await app.listen(port, host);
+  Logger.log(
+    `Tiermode is serving on http://${host.includes(':') ? `[${host}]` : host}:${port}`,
+    'Bootstrap',
+  );
 }
 
 bootstrap().catch((error: unknown) => {

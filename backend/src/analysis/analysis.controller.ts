@@ -5,6 +5,7 @@ import { AnalysisService } from './analysis.service';
 import { AnalysisRequestDto } from './dto/analysis-request.dto';
 import { ColumnStiffnessDto } from './dto/column-stiffness.dto';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 /** The stateless analysis: any signed-in user; nothing is stored. */
 @Controller('analysis')
@@ -17,6 +18,7 @@ export class AnalysisController {
     returns: 'AnalysisResponse',
   })
   @Post()
+  @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   run(@Body() body: AnalysisRequestDto): AnalysisResponse {

@@ -4,6 +4,7 @@ import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
 import { ChecksRequestDto } from './dto/checks-request.dto';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 /** The stateless code-basis checks: any signed-in user; nothing is stored. */
 @Controller('checks')
@@ -16,6 +17,7 @@ export class ChecksController {
     returns: 'ChecksResponse',
   })
   @Post()
+  @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   run(@Body() body: ChecksRequestDto): ChecksResponse {

@@ -9,6 +9,7 @@ import {
   type En1998SpectrumType,
 } from './engine/spectrum-generators';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 /** Design spectrum generators: an editable point table from code parameters. */
 @Controller('spectra')
@@ -19,6 +20,7 @@ export class SpectraController {
     returns: 'SpectrumGenerateResponse',
   })
   @Post('generate')
+  @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   generate(@Body() body: SpectrumGenerateDto): SpectrumGenerateResponse {

@@ -15,6 +15,7 @@ import { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dt
 import { CreateCommentDto, UpdateCommentDto } from './dto/comment.dto';
 import { LockCalculationDto, ReturnCalculationDto } from './dto/review.dto';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 @Controller()
 export class CalculationsController {
@@ -77,6 +78,7 @@ export class CalculationsController {
     returns: 'AnalysisResponse',
   })
   @Post('calculations/:id/analyse')
+  @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   analyse(

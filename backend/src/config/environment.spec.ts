@@ -41,4 +41,26 @@ describe('loadEnvironment', () => {
   it('reads DEMO=off', () => {
     expect(loadEnvironment({ DEMO: 'off', DATABASE_PATH: databasePath }).demoMode).toBe(false);
   });
+
+  it('listens on this machine only while the demo accounts exist, unless HOST says otherwise', () => {
+    expect(loadEnvironment({ DATABASE_PATH: databasePath }).host).toBe('127.0.0.1');
+    expect(loadEnvironment({ DEMO: 'off', DATABASE_PATH: databasePath }).host).toBe('0.0.0.0');
+    expect(loadEnvironment({ HOST: '192.0.2.10', DATABASE_PATH: databasePath }).host).toBe(
+      '192.0.2.10',
+    );
+    expect(() => loadEnvironment({ HOST: 'a b', DATABASE_PATH: databasePath })).toThrow(
+      /HOST must be an address or a host name/,
+    );
+  });
+
+  it('reads the per-person limit on costly routes (120 a minute by default)', () => {
+    expect(loadEnvironment({ DATABASE_PATH: databasePath }).expensiveRequestsPerMinute).toBe(120);
+    expect(
+      loadEnvironment({ RATE_LIMIT_PER_MINUTE: '30', DATABASE_PATH: databasePath })
+        .expensiveRequestsPerMinute,
+    ).toBe(30);
+    expect(() =>
+      loadEnvironment({ RATE_LIMIT_PER_MINUTE: '0', DATABASE_PATH: databasePath }),
+    ).toThrow(/RATE_LIMIT_PER_MINUTE must be at least 1/);
+  });
 });

@@ -51,15 +51,29 @@ class EnvironmentVariables {
   SMTP_URL?: string;
 
   @IsOptional()
+  @Matches(/^[0-9A-Za-z.:-]{1,253}$/, { message: 'HOST must be an address or a host name' })
+  HOST?: string;
+
+  @IsOptional()
+  @IsInt({ message: 'RATE_LIMIT_PER_MINUTE must be a whole number' })
+  @Min(1, { message: 'RATE_LIMIT_PER_MINUTE must be at least 1' })
+  RATE_LIMIT_PER_MINUTE?: number;
+
+  @IsOptional()
   @Matches(/^https?:\/\/[^\s/]+(\/\S*)?$/, {
     message: 'PUBLIC_URL must be an http:// or https:// URL',
   })
   PUBLIC_URL?: string;
 }
 
+/** Two a second, sustained for a minute: more than a person at the storey table makes. */
+export const DEFAULT_RATE_LIMIT_PER_MINUTE = 120;
+
 /** The resolved settings the app reads through ConfigService. */
 export interface AppEnvironment {
   port: number;
+  /** The address to listen on: 127.0.0.1 while DEMO is on (its passwords are published). */
+  host: string;
   databasePath: string;
   /** Where attachments are kept: `attachments/` beside the database. */
   attachmentsDir: string;
@@ -71,6 +85,8 @@ export interface AppEnvironment {
   smtpUrl?: string;
   /** Where people reach the app, for links in mail (default http://localhost:PORT). */
   publicUrl: string;
+  /** Each person's costly requests (analyses, checks, imports, calc packages) a minute. */
+  expensiveRequestsPerMinute: number;
 }
 
 /**
@@ -87,6 +103,11 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
     ADMIN_PASSWORD: emptyToUndefined(raw.ADMIN_PASSWORD),
     SMTP_URL: emptyToUndefined(raw.SMTP_URL),
     PUBLIC_URL: emptyToUndefined(raw.PUBLIC_URL),
+    HOST: emptyToUndefined(raw.HOST),
+    RATE_LIMIT_PER_MINUTE:
+      raw.RATE_LIMIT_PER_MINUTE === undefined || raw.RATE_LIMIT_PER_MINUTE === ''
+        ? undefined
+        : Number(raw.RATE_LIMIT_PER_MINUTE),
   };
   const env = plainToInstance(EnvironmentVariables, picked);
   const errors = validateSync(env, { skipMissingProperties: false });
@@ -96,15 +117,18 @@ export function loadEnvironment(raw: Record<string, unknown>): AppEnvironment {
   }
   const databasePath = resolve(env.DATABASE_PATH ?? DEFAULT_DATABASE_PATH);
   const port = env.PORT ?? 3000;
+  const demoMode = (env.DEMO ?? 'on') === 'on';
   return {
     port,
+    host: env.HOST ?? (demoMode ? '127.0.0.1' : '0.0.0.0'),
     databasePath,
     attachmentsDir: join(dirname(databasePath), 'attachments'),
     jwtSecret: env.JWT_SECRET ?? persistedSecret(dirname(databasePath)),
-    demoMode: (env.DEMO ?? 'on') === 'on',
+    demoMode,
     adminEmail: env.ADMIN_EMAIL,
     adminPassword: env.ADMIN_PASSWORD,
     smtpUrl: env.SMTP_URL,
+    expensiveRequestsPerMinute: env.RATE_LIMIT_PER_MINUTE ?? DEFAULT_RATE_LIMIT_PER_MINUTE,
     publicUrl: (env.PUBLIC_URL ?? `http://localhost:${port}`).replace(/\/+$/, ''),
   };
 }

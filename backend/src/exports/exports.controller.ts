@@ -24,6 +24,7 @@ import { resultTables, type Table } from './results-tables';
 import { spreadsheetSafe } from './spreadsheet-safe';
 import { XLSX_TYPE } from '../imports/templates';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 const TABLES = { modes: 0, modal: 1, combined: 2 } as const;
 
@@ -117,6 +118,7 @@ export class ExportsController {
     returns: 'CalculationDto',
   })
   @Post('projects/:id/calculations/import')
+  @Expensive()
   @CheckPolicies((ability) => ability.can('create', 'Calculation'))
   importJson(
     @CurrentAbility() ability: AppAbility,

@@ -24,6 +24,7 @@ import { parseStoreyTable } from './storey-table';
 import { storeyTemplateCsv, storeyTemplateXlsx, XLSX_TYPE } from './templates';
 import { uploadLimits } from './upload-limits.interceptor';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 const TABLE_LIMIT = 2 * 1024 * 1024;
 
@@ -61,6 +62,7 @@ export class ImportsController {
     },
   })
   @Post('storeys')
+  @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   @UseInterceptors(uploadLimits(TABLE_LIMIT, '2 MB'))
@@ -80,6 +82,7 @@ export class ImportsController {
     upload: { description: 'The table of period and Sa' },
   })
   @Post('spectrum')
+  @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
   @UseInterceptors(uploadLimits(TABLE_LIMIT, '2 MB'))

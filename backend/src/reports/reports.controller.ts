@@ -6,6 +6,7 @@ import { CalculationsService } from '../calculations/calculations.service';
 import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import { buildCalcPackage } from './calc-package';
 import { ApiContract } from '../openapi/api-contract.decorator';
+import { Expensive } from '../rate-limit/expensive.decorator';
 
 @Controller('calculations')
 export class ReportsController {
@@ -14,6 +15,7 @@ export class ReportsController {
   /** The calc package as a PDF; a locked calc's comes from its sealed data, checked first. */
   @ApiContract({ summary: 'The calc package PDF', file: 'application/pdf' })
   @Get(':id/report.pdf')
+  @Expensive()
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async report(
     @CurrentAbility() ability: AppAbility,
