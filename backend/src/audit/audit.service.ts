@@ -18,14 +18,30 @@ export class AuditService {
 
   /**
    * Appends the event to the chain and flushes `em` with it, so the change and its record are
-   * written together or not at all.
+   * written together or not at all. `guard` runs first inside the same transaction (a
+   * conditional write that throws when the change is no longer allowed, say), so what it checked
+   * still holds when the change is written, in this process or another on the same database.
    */
-  commit(em: EntityManager, entry: AuditEntry): Promise<void> {
+  commit(
+    em: EntityManager,
+    entry: AuditEntry,
+    guard?: (em: EntityManager) => Promise<void>,
+  ): Promise<void> {
     const run = this.tail.then(async () => {
-      await appendAuditEvent(em, entry);
       try {
-        await em.flush();
+        if (guard) {
+          // The guard writes first, so the transaction holds SQLite's write lock before it
+          // reads the last link: no other process can append in between.
+          await em.begin();
+          await guard(em);
+          await appendAuditEvent(em, entry);
+          await em.commit();
+        } else {
+          await appendAuditEvent(em, entry);
+          await em.flush();
+        }
       } catch (error) {
+        if (guard) await em.rollback().catch(() => undefined);
         if (
           error instanceof UniqueConstraintViolationException &&
           /audit_events/.test(error.message)
@@ -39,6 +55,20 @@ export class AuditService {
     });
     this.tail = run.catch(() => undefined);
     return run;
+  }
+
+  /** Whether `actorId` did any of `actions` to any of the calculations. */
+  async hasActed(
+    actorId: string,
+    calculationIds: string[],
+    actions: readonly string[],
+  ): Promise<boolean> {
+    const count = await this.em.count(AuditEvent, {
+      actorId,
+      calculationId: { $in: calculationIds },
+      action: { $in: [...actions] },
+    });
+    return count > 0;
   }
 
   async historyOf(calculationId: string): Promise<AuditEventDto[]> {

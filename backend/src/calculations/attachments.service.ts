@@ -18,7 +18,7 @@ import { detectKind, polyglotProblem } from '../imports/file-checks';
 import type { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { calculationSubject, toAttachmentDto } from './calculation.mapper';
-import { CalculationsService } from './calculations.service';
+import { CalculationsService, stillIn } from './calculations.service';
 
 const KINDS = {
   pdf: { contentType: 'application/pdf', extension: 'pdf' },
@@ -76,12 +76,17 @@ export class AttachmentsService {
     // an unreferenced file, never a row without its file.
     await writeFile(join(dir, attachment.storedName), file.buffer, { flag: 'wx' });
     calc.attachments.add(attachment);
-    await this.audit.commit(this.em, {
-      calculationId: calc.id,
-      actor,
-      action: 'attached',
-      detail: { fileName: attachment.fileName, sha256: attachment.sha256 },
-    });
+    await this.audit.commit(
+      this.em,
+      {
+        calculationId: calc.id,
+        actor,
+        action: 'attached',
+        detail: { fileName: attachment.fileName, sha256: attachment.sha256 },
+      },
+      // Attachments are sealed with the calc: one may only land on a draft.
+      stillIn(calc, ['draft']),
+    );
     return this.calculations.get(ability, calc.id);
   }
 

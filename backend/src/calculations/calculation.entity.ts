@@ -20,10 +20,12 @@ import {
   type CalculationStatus,
   type SealDto,
 } from '@tiermode/shared-types';
+import { ConflictException } from '@nestjs/common';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { ReviewComment } from './review-comment.entity';
+import { sealOf } from './lock';
 
 @Entity({ tableName: 'calculations' })
 export class Calculation {
@@ -111,8 +113,11 @@ export class Calculation {
   @Property({ type: 'json', nullable: true })
   seal: SealDto | null = null;
 
-  /** The locked revision this draft was revised from. */
-  @ManyToOne(() => Calculation, { nullable: true })
+  /**
+   * The locked revision this draft was revised from. Unique: a calc has at most one next
+   * revision, however many revise requests arrive at once (the database refuses a second).
+   */
+  @ManyToOne(() => Calculation, { nullable: true, unique: true })
   previousRevision: Calculation | null = null;
 
   @OneToMany(() => ReviewComment, (comment) => comment.calculation, {
@@ -131,4 +136,104 @@ export class Calculation {
 
   @Property({ type: 'integer', version: true })
   version!: number;
+
+  // The workflow: every change of status happens in one of these methods, which refuse (409) a
+  // change the current status does not allow. The services check who may act (CASL, licence,
+  // independence); the flush's version check makes two changes at once end in one 409.
+
+  /** Locked or superseded: a calc of record, which never changes again. */
+  isOfRecord(): boolean {
+    return this.status === 'locked' || this.status === 'superseded';
+  }
+
+  /** Comments may be added and resolved until the calc is of record. */
+  assertNotOfRecord(): void {
+    if (this.isOfRecord()) throw new ConflictException(`${this.sealedPhrase()} and can never change`);
+  }
+
+  /** Inputs, analysis, attachments and submission change only while the calc is a draft. */
+  assertWritable(): void {
+    if (this.isOfRecord()) {
+      throw new ConflictException(
+        `${this.sealedPhrase()} and can never change; revise it to start a new draft`,
+      );
+    }
+    if (this.status === 'submitted') {
+      throw new ConflictException(
+        'This calculation is submitted for review; it can change again once the reviewer returns it',
+      );
+    }
+  }
+
+  /** Designer: a draft whose stored analysis matches its inputs goes to review. */
+  submit(at: Date): void {
+    this.assertWritable();
+    if (!this.analysis || !this.analysedAt || this.analysedAt < this.inputsChangedAt) {
+      throw new ConflictException(
+        'Analyse the current inputs before submitting: the stored analysis is missing or older than the inputs',
+      );
+    }
+    this.status = 'submitted';
+    this.submittedAt = at;
+  }
+
+  /** Reviewer: a submitted calc goes back to its designers as a draft. */
+  returnToDesigner(reviewer: User, at: Date): void {
+    this.assertSubmitted('returned');
+    this.status = 'draft';
+    this.returnedAt = at;
+    this.reviewer = reviewer;
+  }
+
+  /**
+   * Licensed, independent reviewer: seals a submitted calc as the calc of record, and
+   * supersedes the locked revision it came from (loaded in `previousRevision`).
+   */
+  lock(reviewer: User, statement: string, at: Date): SealDto {
+    this.assertSubmitted('locked');
+    const seal = sealOf(this, reviewer, statement, at);
+    this.seal = seal;
+    this.status = 'locked';
+    this.lockedAt = at;
+    this.reviewer = reviewer;
+    if (this.previousRevision?.status === 'locked') this.previousRevision.status = 'superseded';
+    return seal;
+  }
+
+  /** Designer: the next revision of a locked calc, as a new draft with its inputs. */
+  revise(author: User): Calculation {
+    this.assertRevisable();
+    const next = new Calculation();
+    next.project = this.project;
+    next.title = this.title;
+    next.revision = this.revision + 1;
+    next.inputs = structuredClone(this.inputs);
+    next.displayUnits = this.displayUnits;
+    next.basis = this.basis ? structuredClone(this.basis) : null;
+    next.author = author;
+    next.previousRevision = this;
+    return next;
+  }
+
+  /** Only the locked revision (the current calc of record) has a next revision. */
+  assertRevisable(): void {
+    if (this.status !== 'locked') {
+      throw new ConflictException(
+        `Only a locked calculation can be revised; this one is ${this.status}`,
+      );
+    }
+  }
+
+  private assertSubmitted(action: 'locked' | 'returned'): void {
+    this.assertNotOfRecord();
+    if (this.status !== 'submitted') {
+      throw new ConflictException(
+        `Only a submitted calculation can be ${action}; this one is ${this.status}`,
+      );
+    }
+  }
+
+  private sealedPhrase(): string {
+    return `This calculation is ${this.status} (sealed ${this.seal?.hash.slice(0, 12) ?? ''}…)`;
+  }
 }

@@ -1,12 +1,23 @@
 import { ForbiddenError, subject } from '@casl/ability';
-import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/sqlite';
-import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import {
+  EntityManager,
+  LockMode,
+  OptimisticLockError,
+  UniqueConstraintViolationException,
+} from '@mikro-orm/sqlite';
+import {
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+  NotFoundException,
+} from '@nestjs/common';
 import { isLicensed } from '../authorization/licence';
 import type {
   AnalysisRequest,
   AnalysisResponse,
   CalculationDto,
   CalculationInputs,
+  CalculationStatus,
   SealCheckResponse,
 } from '@tiermode/shared-types';
 import { AnalysisService } from '../analysis/analysis.service';
@@ -18,7 +29,7 @@ import { Project } from '../projects/project.entity';
 import { projectSubject } from '../projects/project.mapper';
 import { User } from '../users/user.entity';
 import { ReviewComment } from './review-comment.entity';
-import { applyLock, sealedContentOf } from './lock';
+import { sealedContentOf } from './lock';
 import { sealHash } from './seal';
 import { Calculation } from './calculation.entity';
 import { calculationSubject, toCalculationDto } from './calculation.mapper';
@@ -32,6 +43,48 @@ const POPULATE = [
   'attachments.uploadedBy',
   'previousRevision',
 ] as const;
+
+/** Comments may be written while a calc is a draft or under review. */
+const OPEN_FOR_COMMENTS: CalculationStatus[] = ['draft', 'submitted'];
+/** What a designer does to a calc: a reviewer who did any of it is not independent of it. */
+const DESIGN_ACTIONS = [
+  'created',
+  'edited',
+  'analysed',
+  'submitted',
+  'revised',
+  'attached',
+  'imported',
+];
+
+/**
+ * For AuditService.commit: inside the write's transaction, the calc's stored status must still
+ * be one of `allowed`, or nothing is written (409). A comment sent as the calc is locked is so
+ * either stored before the lock or refused, in this process or another.
+ */
+export function stillIn(calc: Calculation, allowed: CalculationStatus[]) {
+  return async (em: EntityManager): Promise<void> => {
+    // A write that changes nothing but takes SQLite's write lock and tells whether the status
+    // still allows the change. (em.nativeUpdate would also bump the calc's version, and so turn
+    // every comment into a conflict for whoever is editing the calc.)
+    const placeholders = allowed.map(() => '?').join(', ');
+    const result = await em
+      .getConnection()
+      .execute<{ affectedRows: number }>(
+        `update \`calculations\` set \`status\` = \`status\` where \`id\` = ? and \`status\` in (${placeholders})`,
+        [calc.id, ...allowed],
+        'run',
+        em.getTransactionContext(),
+      );
+    const touched = result.affectedRows;
+    if (touched === 0) {
+      const now = await em.findOne(Calculation, { id: calc.id }, { refresh: true });
+      throw new ConflictException(
+        `This calculation became ${now?.status ?? 'unavailable'} while your change was on its way; nothing of yours was saved`,
+      );
+    }
+  };
+}
 
 /** The inputs as plain JSON, whatever class instances validation made of them. */
 function plainInputs(inputs: AnalysisRequest): CalculationInputs {
@@ -173,13 +226,7 @@ export class CalculationsService {
   /** Designer: send a draft whose stored analysis matches its inputs to review. */
   async submit(ability: AppAbility, actor: User, id: string): Promise<CalculationDto> {
     const calc = await this.loadForWrite(ability, id, 'submit');
-    if (!calc.analysis || !calc.analysedAt || calc.analysedAt < calc.inputsChangedAt) {
-      throw new ConflictException(
-        'Analyse the current inputs before submitting: the stored analysis is missing or older than the inputs',
-      );
-    }
-    calc.status = 'submitted';
-    calc.submittedAt = new Date();
+    calc.submit(new Date());
     const reviewers = await this.em.find(User, { role: 'reviewer', active: true });
     this.mail.queue(this.em, {
       to: reviewers.map((r) => r.email),
@@ -198,11 +245,9 @@ export class CalculationsService {
     id: string,
     comment: string,
   ): Promise<CalculationDto> {
-    const calc = await this.loadSubmitted(ability, id, 'return');
+    const calc = await this.loadToReview(ability, id, 'return');
+    calc.returnToDesigner(reviewer, new Date());
     this.em.create(ReviewComment, { calculation: calc, author: reviewer, body: comment });
-    calc.status = 'draft';
-    calc.returnedAt = new Date();
-    calc.reviewer = reviewer;
     this.mail.queue(this.em, {
       to: [calc.author.email],
       subject: `Returned with comments: ${calc.title} (revision ${calc.revision})`,
@@ -230,11 +275,12 @@ export class CalculationsService {
     id: string,
     statement: string,
   ): Promise<CalculationDto> {
-    const calc = await this.loadSubmitted(ability, id, 'lock');
-    if (!calc.analysis || !calc.engineVersion || !isLicensed(reviewer)) {
-      throw new ConflictException('This calculation cannot be locked: it has no stored analysis');
+    const calc = await this.loadToReview(ability, id, 'lock');
+    if (!isLicensed(reviewer)) {
+      throw new ForbiddenException('Only a reviewer with a current licence may lock a calculation');
     }
-    const seal = applyLock(calc, reviewer, statement, new Date());
+    await this.assertIndependent(reviewer, calc);
+    const seal = calc.lock(reviewer, statement, new Date());
     const previous = calc.previousRevision;
     this.mail.queue(this.em, {
       to: [calc.author.email],
@@ -258,35 +304,34 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    if (calc.status !== 'locked') {
-      throw new ConflictException(
-        `Only a locked calculation can be revised; this one is ${calc.status}`,
-      );
-    }
+    calc.assertRevisable();
     ForbiddenError.from(ability).throwUnlessCan(
       'revise',
       subject('Calculation', calculationSubject(calc)),
     );
-    const next = await this.em.findOne(Calculation, { previousRevision: calc });
-    if (next) {
-      throw new ConflictException(`Revision ${next.revision} of this calculation already exists`);
+    const existing = `Revision ${calc.revision + 1} of this calculation already exists`;
+    if (await this.em.findOne(Calculation, { previousRevision: calc })) {
+      throw new ConflictException(existing);
     }
-    const draft = this.em.create(Calculation, {
-      project: calc.project,
-      title: calc.title,
-      revision: calc.revision + 1,
-      inputs: structuredClone(calc.inputs),
-      displayUnits: calc.displayUnits,
-      basis: calc.basis ? structuredClone(calc.basis) : null,
-      author,
-      previousRevision: calc,
-    });
-    await this.audit.commit(this.em, {
-      calculationId: draft.id,
-      actor: author,
-      action: 'revised',
-      detail: { from: calc.id, revision: draft.revision },
-    });
+    const draft = calc.revise(author);
+    this.em.persist(draft);
+    try {
+      await this.audit.commit(this.em, {
+        calculationId: draft.id,
+        actor: author,
+        action: 'revised',
+        detail: { from: calc.id, revision: draft.revision },
+      });
+    } catch (error) {
+      // Two revise requests at once: the unique index on previous_revision_id keeps one.
+      if (
+        error instanceof UniqueConstraintViolationException &&
+        /previous_revision_id/.test(error.message)
+      ) {
+        throw new ConflictException(existing);
+      }
+      throw error;
+    }
     return toCalculationDto(await this.load(draft.id));
   }
 
@@ -303,18 +348,22 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    this.assertNotOfRecord(calc);
+    calc.assertNotOfRecord();
     ForbiddenError.from(ability).throwUnlessCan(
       'comment',
       subject('Calculation', calculationSubject(calc)),
     );
     const comment = this.em.create(ReviewComment, { calculation: calc, author, body, target });
-    await this.audit.commit(this.em, {
-      calculationId: calc.id,
-      actor: author,
-      action: 'commented',
-      detail: { commentId: comment.id, target },
-    });
+    await this.audit.commit(
+      this.em,
+      {
+        calculationId: calc.id,
+        actor: author,
+        action: 'commented',
+        detail: { commentId: comment.id, target },
+      },
+      stillIn(calc, OPEN_FOR_COMMENTS),
+    );
     await this.em.populate(calc, ['comments.author'], { refresh: true });
     return toCalculationDto(calc);
   }
@@ -333,26 +382,22 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    this.assertNotOfRecord(calc);
+    calc.assertNotOfRecord();
     const record = { id: comment.id, projectMemberIds: calculationSubject(calc).projectMemberIds };
     ForbiddenError.from(ability).throwUnlessCan('update', subject('ReviewComment', record));
     comment.resolved = resolved;
-    await this.audit.commit(this.em, {
-      calculationId: calc.id,
-      actor,
-      action: resolved ? 'comment resolved' : 'comment reopened',
-      detail: { commentId },
-    });
+    await this.audit.commit(
+      this.em,
+      {
+        calculationId: calc.id,
+        actor,
+        action: resolved ? 'comment resolved' : 'comment reopened',
+        detail: { commentId },
+      },
+      stillIn(calc, OPEN_FOR_COMMENTS),
+    );
     await this.em.populate(calc, ['comments.author'], { refresh: true });
     return toCalculationDto(calc);
-  }
-
-  private assertNotOfRecord(calc: Calculation): void {
-    if (calc.status === 'locked' || calc.status === 'superseded') {
-      throw new ConflictException(
-        `This calculation is ${calc.status} (sealed ${calc.seal?.hash.slice(0, 12) ?? ''}…) and can never change`,
-      );
-    }
   }
 
   /** The audit trail of one calculation. */
@@ -379,7 +424,8 @@ export class CalculationsService {
     return { valid: recomputed === seal.hash, hash: seal.hash, recomputed, seal };
   }
 
-  private async loadSubmitted(
+  /** A calc a reviewer is about to return or lock (its status is checked by the entity). */
+  private async loadToReview(
     ability: AppAbility,
     id: string,
     action: 'return' | 'lock',
@@ -393,14 +439,37 @@ export class CalculationsService {
       action,
       subject('Calculation', calculationSubject(calc)),
     );
-    if (calc.status !== 'submitted') {
-      throw new ConflictException(
-        calc.status === 'locked' || calc.status === 'superseded'
-          ? `This calculation is ${calc.status} (sealed ${calc.seal?.hash.slice(0, 12) ?? ''}…) and can never change`
-          : `Only a submitted calculation can be ${action === 'lock' ? 'locked' : 'returned'}; this one is ${calc.status}`,
+    return calc;
+  }
+
+  /**
+   * Independence: a reviewer may not lock a calc whose any revision they wrote, edited,
+   * analysed or submitted, as the audit trail records it (authorship alone once let a designer
+   * who reworked another's calc, later made a reviewer, lock it).
+   */
+  private async assertIndependent(reviewer: User, calc: Calculation): Promise<void> {
+    const chain: Calculation[] = [];
+    for (let c: Calculation | null = calc; c;) {
+      chain.push(c);
+      c = c.previousRevision
+        ? await this.em.findOne(
+            Calculation,
+            { id: c.previousRevision.id },
+            { populate: ['author'] },
+          )
+        : null;
+    }
+    const authored = chain.some((c) => c.author.id === reviewer.id);
+    const acted = await this.audit.hasActed(
+      reviewer.id,
+      chain.map((c) => c.id),
+      DESIGN_ACTIONS,
+    );
+    if (authored || acted) {
+      throw new ForbiddenException(
+        'You wrote, edited, analysed or submitted a revision of this calculation, so you cannot lock it: the lock must come from an independent reviewer',
       );
     }
-    return calc;
   }
 
   private async load(id: string): Promise<Calculation> {
@@ -423,16 +492,7 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    if (calc.status === 'locked' || calc.status === 'superseded') {
-      throw new ConflictException(
-        `This calculation is ${calc.status} (sealed ${calc.seal?.hash.slice(0, 12) ?? ''}…) and can never change; revise it to start a new draft`,
-      );
-    }
-    if (calc.status === 'submitted') {
-      throw new ConflictException(
-        'This calculation is submitted for review; it can change again once the reviewer returns it',
-      );
-    }
+    calc.assertWritable();
     ForbiddenError.from(ability).throwUnlessCan(
       action,
       subject('Calculation', calculationSubject(calc)),

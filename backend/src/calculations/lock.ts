@@ -1,3 +1,4 @@
+import { ConflictException } from '@nestjs/common';
 import type { SealDto } from '@tiermode/shared-types';
 import type { User } from '../users/user.entity';
 import type { Calculation } from './calculation.entity';
@@ -32,11 +33,11 @@ export function sealedContentOf(
 }
 
 /**
- * Locks a submitted calc: seals it with the reviewer's name, licence and statement and the time,
- * and supersedes the locked revision it came from (loaded in `previousRevision`). The caller has
- * checked who may lock and that the stored analysis is current.
+ * The seal of a submitted calc about to be locked: the reviewer's name, licence and statement,
+ * the time, and the hash of everything sealed. The entity's `lock` sets it; the caller has
+ * checked who may lock.
  */
-export function applyLock(
+export function sealOf(
   calc: Calculation,
   reviewer: User,
   statement: string,
@@ -50,13 +51,8 @@ export function applyLock(
     lockedAt: lockedAt.toISOString(),
   };
   const content = sealedContentOf(calc, fields);
-  if (!content) throw new Error('A calculation without a stored analysis cannot be sealed');
-  const seal: SealDto = { hash: sealHash(content), reviewerId: reviewer.id, ...fields };
-  calc.seal = seal;
-  calc.status = 'locked';
-  calc.lockedAt = lockedAt;
-  calc.reviewer = reviewer;
-  const previous = calc.previousRevision;
-  if (previous && previous.status === 'locked') previous.status = 'superseded';
-  return seal;
+  if (!content) {
+    throw new ConflictException('This calculation cannot be locked: it has no stored analysis');
+  }
+  return { hash: sealHash(content), reviewerId: reviewer.id, ...fields };
 }

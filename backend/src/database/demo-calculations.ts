@@ -4,7 +4,6 @@ import { analyse } from '../analysis/engine/analyse';
 import { asce7TwoPeriodSpectrum } from '../analysis/engine/spectrum-generators';
 import { appendAuditEvent } from '../audit/append-audit-event';
 import { Calculation } from '../calculations/calculation.entity';
-import { applyLock } from '../calculations/lock';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 
@@ -76,9 +75,8 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
       analysis: result,
       engineVersion: result.engineVersion,
       analysedAt: at(),
-      status: 'submitted',
-      submittedAt: at(),
     });
+    calc.submit(at());
     for (const [action, when] of [
       ['created', created],
       ['analysed', calc.analysedAt],
@@ -103,8 +101,7 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
     housingBlock(),
   );
   const lockedAt = at();
-  const seal = applyLock(
-    housing,
+  const seal = housing.lock(
     reviewer,
     'Accepted as the calc of record for the permit set (demo).',
     lockedAt,

@@ -11,6 +11,7 @@ import { Migration20261202004852 } from './Migration20261202004852';
 import { Migration20261202012253 } from './Migration20261202012253';
 import { Migration20261202015831 } from './Migration20261202015831';
 import { Migration20261202022030 } from './Migration20261202022030';
+import { Migration20261203073309 } from './Migration20261203073309';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -26,4 +27,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202012253', class: Migration20261202012253 },
   { name: 'Migration20261202015831', class: Migration20261202015831 },
   { name: 'Migration20261202022030', class: Migration20261202022030 },
+  { name: 'Migration20261203073309', class: Migration20261203073309 },
 ];
