@@ -20,6 +20,7 @@ import { MailModule } from './mail/mail.module';
 import { ProjectsModule } from './projects/projects.module';
 import { RateLimitModule } from './rate-limit/rate-limit.module';
 import { ReportsModule } from './reports/reports.module';
+import { SigningModule } from './signing/signing.module';
 import { UsersModule } from './users/users.module';
 import { VerificationModule } from './verification/verification.module';
 
@@ -45,6 +46,7 @@ const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
     HealthModule,
     MailModule,
     RateLimitModule,
+    SigningModule,
     ...webApp,
   ],
   providers: [

@@ -140,6 +140,18 @@ const MATRIX: Cell[] = [
     },
   },
   {
+    route: 'POST /api/users/:id/set-password-link',
+    allowed: ['admin'],
+    ok: 200,
+    call: async (c) => {
+      const users = await http().get('/api/users').set(as('admin')).expect(200);
+      const student = (users.body as { id: string; email: string }[]).find(
+        (u) => u.email === 'student@tiermode.test',
+      )!;
+      return http().post(`/api/users/${student.id}/set-password-link`).set(as(c));
+    },
+  },
+  {
     route: 'GET /api/projects',
     allowed: staff,
     ok: 200,
@@ -538,6 +550,8 @@ describe('the role x action matrix', () => {
         'POST /api/auth/password',
         'POST /api/auth/set-password',
         'GET /api/health',
+        // Public: the seal's public key (seal-signature.e2e-spec).
+        'GET /api/seal/public-key',
       ]),
     );
     const routes = routesOf(state.app);

@@ -12,7 +12,12 @@ import { routesOf } from './support/routes';
 const { state, http, as } = useSignedInApp();
 let doc: OpenAPIObject;
 const METHODS = ['get', 'post', 'patch', 'put', 'delete'] as const;
-const PUBLIC = ['POST /api/auth/login', 'POST /api/auth/set-password', 'GET /api/health'];
+const PUBLIC = [
+  'POST /api/auth/login',
+  'POST /api/auth/set-password',
+  'GET /api/health',
+  'GET /api/seal/public-key',
+];
 
 /** Every operation as "METHOD /path" (Express's :id style) with its object. */
 function operations(): [string, Record<string, unknown>][] {

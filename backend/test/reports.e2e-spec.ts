@@ -47,10 +47,14 @@ describe('GET /api/calculations/:id/report.pdf', () => {
     expect(text).toMatch(new RegExp(`page 1 of ${pages}`));
   });
 
-  it('carries the seal hash of a locked calc, and no PRELIMINARY mark', async () => {
+  it('carries the seal hash, signature and key of a locked calc, and no PRELIMINARY mark', async () => {
     const { text } = await pdfText(await packageOf(locked.id, 'student'));
     expect(text).toContain(locked.seal!.hash);
-    expect(text).toContain('matches the seal');
+    // pdf-parse breaks the long base64 signature over two lines: compare without spaces.
+    expect(text.replace(/\s+/g, '')).toContain(locked.seal!.signature!);
+    expect(text).toContain(`Signing key id ${locked.seal!.keyId}`);
+    expect(text).toContain('matched the seal');
+    expect(text).toContain('"tiermode-seal:" followed by the');
     expect(text).not.toContain('PRELIMINARY');
   });
 

@@ -10,20 +10,35 @@ import { Calculation } from '../src/calculations/calculation.entity';
 import { sealedContentOf } from '../src/calculations/lock';
 import { sealHash } from '../src/calculations/seal';
 import { User } from '../src/users/user.entity';
+import { AuditHead } from '../src/audit/audit-head';
+import { loadEnvironment } from '../src/config/environment';
+import { SigningKey } from '../src/signing/signing-key';
 
+const signings = new WeakMap<MikroORM, { key: SigningKey; head: AuditHead }>();
+
+/** A fresh database, with a seal key and chain head of its own beside it. */
 async function freshOrm(): Promise<MikroORM> {
   const dir = mkdtempSync(join(tmpdir(), 'tiermode-seed-'));
-  return MikroORM.init(createOrmConfig(join(dir, 'db.sqlite')));
+  const env = loadEnvironment({
+    DATABASE_PATH: join(dir, 'db.sqlite'),
+    JWT_SECRET: 'x'.repeat(32),
+  });
+  const orm = await MikroORM.init(createOrmConfig(env.databasePath));
+  const key = new SigningKey(env.sealPrivateKeyPem);
+  signings.set(orm, { key, head: new AuditHead(env.auditHeadPath, key) });
+  return orm;
 }
+
+const signingOf = (orm: MikroORM) => signings.get(orm)!;
 
 describe('Migrations and seeding', () => {
   it('migrates an empty database, seeds the four demo accounts once, and is safe to rerun', async () => {
     const orm = await freshOrm();
     try {
-      const first = await prepareDatabase(orm, { demoMode: true });
+      const first = await prepareDatabase(orm, { demoMode: true }, signingOf(orm));
       expect(first.applied.length).toBeGreaterThan(0);
       expect(first.seed).toBe('demo-accounts-created');
-      const again = await prepareDatabase(orm, { demoMode: true });
+      const again = await prepareDatabase(orm, { demoMode: true }, signingOf(orm));
       expect(again).toEqual({ applied: [], seed: 'nothing-to-do' });
       const users = await orm.em.fork().find(User, {}, { orderBy: { email: 'asc' } });
       expect(users.map((u) => [u.email, u.role])).toEqual([
@@ -40,7 +55,7 @@ describe('Migrations and seeding', () => {
   it('seeds the demo buildings: one calc locked with a valid seal, one submitted, one draft, all on the audit trail', async () => {
     const orm = await freshOrm();
     try {
-      await prepareDatabase(orm, { demoMode: true });
+      await prepareDatabase(orm, { demoMode: true }, signingOf(orm));
       const em = orm.em.fork();
       const calcs = await em.find(
         Calculation,
@@ -55,6 +70,10 @@ describe('Migrations and seeding', () => {
       const locked = calcs[0];
       const content = locked.seal && sealedContentOf(locked, locked.seal);
       expect(content && sealHash(content)).toBe(locked.seal?.hash);
+      expect(locked.seal?.sealVersion).toBe(2);
+      expect(signingOf(orm).key.verify('seal', locked.seal!.hash, locked.seal?.signature)).toBe(
+        true,
+      );
       expect(locked.analysis?.modes).toHaveLength(7);
       const events = await em.find(AuditEvent, {}, { orderBy: { seq: 'asc' } });
       expect(events.map((e) => e.action)).toEqual([
@@ -69,7 +88,7 @@ describe('Migrations and seeding', () => {
       ]);
       expect(firstBrokenEvent(events)).toBeNull();
       // Running again on the seeded database adds nothing.
-      await prepareDatabase(orm, { demoMode: true });
+      await prepareDatabase(orm, { demoMode: true }, signingOf(orm));
       expect(await orm.em.fork().count(Calculation, {})).toBe(3);
     } finally {
       await orm.close();
@@ -93,21 +112,29 @@ describe('Migrations and seeding', () => {
   it('with DEMO=off creates the first admin from ADMIN_EMAIL and ADMIN_PASSWORD, and no demo accounts', async () => {
     const orm = await freshOrm();
     try {
-      await expect(prepareDatabase(orm, { demoMode: false })).rejects.toThrow(
+      await expect(prepareDatabase(orm, { demoMode: false }, signingOf(orm))).rejects.toThrow(
         'DEMO=off on an empty database: set ADMIN_EMAIL and ADMIN_PASSWORD to create the first admin',
       );
       await expect(
-        prepareDatabase(orm, {
-          demoMode: false,
-          adminEmail: 'it@firm.test',
-          adminPassword: 'password123',
-        }),
+        prepareDatabase(
+          orm,
+          {
+            demoMode: false,
+            adminEmail: 'it@firm.test',
+            adminPassword: 'password123',
+          },
+          signingOf(orm),
+        ),
       ).rejects.toThrow('ADMIN_PASSWORD is one of the most common passwords');
-      const result = await prepareDatabase(orm, {
-        demoMode: false,
-        adminEmail: 'IT@firm.test',
-        adminPassword: 'lintel-corbel-2031',
-      });
+      const result = await prepareDatabase(
+        orm,
+        {
+          demoMode: false,
+          adminEmail: 'IT@firm.test',
+          adminPassword: 'lintel-corbel-2031',
+        },
+        signingOf(orm),
+      );
       expect(result.seed).toBe('first-admin-created');
       const users = await orm.em.fork().find(User, {});
       expect(users.map((u) => [u.email, u.role])).toEqual([['it@firm.test', 'admin']]);
@@ -119,8 +146,8 @@ describe('Migrations and seeding', () => {
   it('with DEMO=off deactivates demo accounts left by an earlier demo run', async () => {
     const orm = await freshOrm();
     try {
-      await prepareDatabase(orm, { demoMode: true });
-      await prepareDatabase(orm, { demoMode: false });
+      await prepareDatabase(orm, { demoMode: true }, signingOf(orm));
+      await prepareDatabase(orm, { demoMode: false }, signingOf(orm));
       const users = await orm.em.fork().find(User, {});
       expect(users.every((u) => !u.active)).toBe(true);
     } finally {

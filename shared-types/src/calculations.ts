@@ -84,14 +84,52 @@ export interface SealDto {
   statement: string;
   /** ISO time of the lock. */
   lockedAt: string;
+  /**
+   * 2: the seal covers the calc's identity too (id, project, title, revision, author, status,
+   * previous revision) and is signed. Absent on seals made before signing.
+   */
+  sealVersion?: 2;
+  /** The project's and the author's names as they were at the lock (sealed). */
+  projectName?: string;
+  authorName?: string;
+  /** The reviewer's licence expiry date at the lock (sealed). */
+  licenseExpiresOn?: string | null;
+  /**
+   * Ed25519 signature (base64) of the UTF-8 text `tiermode-seal:<hash>`, by the key published at
+   * `GET /api/seal/public-key` (whose id is `keyId`).
+   */
+  signature?: string;
+  keyId?: string;
 }
 
-/** `GET /api/calculations/:id/seal`: the stored hash and the one recomputed from what is stored. */
+/**
+ * `GET /api/calculations/:id/seal`: the stored hash and the one recomputed from what is stored,
+ * the signature, and the calc's lock event on the audit trail, each judged on its own. `valid`
+ * is all of them.
+ */
 export interface SealCheckResponse {
   valid: boolean;
   hash: string;
   recomputed: string;
   seal: SealDto;
+  /** The recomputed hash equals the sealed one. */
+  hashValid: boolean;
+  /** The seal's signature: valid, invalid, or absent (a seal made before signing). */
+  signature: 'valid' | 'invalid' | 'absent';
+  /** The calc's lock event on the audit trail, naming this hash, signed and whole. */
+  lockEvent: 'valid' | 'missing' | 'invalid';
+  /** What is wrong, in words; empty when valid. */
+  problems: string[];
+}
+
+/** `GET /api/seal/public-key`: the key that signs seals and audit events, for anyone to verify. */
+export interface SealPublicKeyResponse {
+  algorithm: 'Ed25519';
+  keyId: string;
+  /** SubjectPublicKeyInfo, PEM: what `openssl pkeyutl -verify -pubin -inkey` reads. */
+  publicKeyPem: string;
+  /** The UTF-8 texts that are signed: `<value>` is the seal's hash, or the event's hash. */
+  messages: { seal: string; auditEvent: string; auditHead: string };
 }
 
 /** `POST /api/calculations/:id/return`. */

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import { AuditEvent } from './audit-event.entity';
+import type { SigningKey } from '../signing/signing-key';
 import { auditHash, GENESIS_HASH } from './audit-hash';
 
 export interface AuditEntry {
@@ -14,7 +15,11 @@ export interface AuditEntry {
  * Adds the next link of the chain to `em` (written by its next flush). The caller makes sure no
  * other event is appended between this read of the last link and that flush.
  */
-export async function appendAuditEvent(em: EntityManager, entry: AuditEntry): Promise<AuditEvent> {
+export async function appendAuditEvent(
+  em: EntityManager,
+  key: SigningKey,
+  entry: AuditEntry,
+): Promise<AuditEvent> {
   const [last] = await em.find(AuditEvent, {}, { orderBy: { seq: 'desc' }, limit: 1 });
   const content = {
     seq: (last?.seq ?? 0) + 1,
@@ -26,5 +31,6 @@ export async function appendAuditEvent(em: EntityManager, entry: AuditEntry): Pr
     at: (entry.at ?? new Date()).toISOString(),
     previousHash: last?.hash ?? GENESIS_HASH,
   };
-  return em.create(AuditEvent, { ...content, hash: auditHash(content) });
+  const hash = auditHash(content);
+  return em.create(AuditEvent, { ...content, hash, signature: key.sign('audit-event', hash) });
 }

@@ -34,4 +34,11 @@ export class AuditEvent {
 
   @Property({ type: 'string', length: 64 })
   hash!: string;
+
+  /**
+   * Ed25519 signature (base64) of the hash, by the server's seal key, which lives outside the
+   * database: a rewritten event cannot be signed again. Null for events made before signing.
+   */
+  @Property({ type: 'string', length: 100, nullable: true })
+  signature: string | null = null;
 }

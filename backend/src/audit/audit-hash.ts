@@ -4,8 +4,8 @@ import canonicalize from 'canonicalize';
 
 export const GENESIS_HASH = '0'.repeat(64);
 
-/** What an event's hash covers: everything in it but the hash itself. */
-export type AuditContent = Omit<AuditEventDto, 'hash'>;
+/** What an event's hash covers: everything in it but the hash and the signature of the hash. */
+export type AuditContent = Omit<AuditEventDto, 'hash' | 'signature'>;
 
 /** SHA-256 (hex) of the RFC 8785 canonical JSON of the event, its link included. */
 export function auditHash(content: AuditContent): string {
@@ -20,7 +20,15 @@ export function firstBrokenEvent(
 ): number | null {
   let previous = GENESIS_HASH;
   for (const event of events) {
-    const { hash, ...content } = event;
+    const {
+      hash,
+      signature: _signature,
+      ...content
+    } = event as AuditContent & {
+      hash: string;
+      signature?: unknown;
+    };
+    void _signature;
     if (content.previousHash !== previous || auditHash(content) !== hash) return event.seq;
     previous = hash;
   }

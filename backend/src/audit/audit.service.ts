@@ -3,7 +3,9 @@ import { ConflictException, Injectable } from '@nestjs/common';
 import type { AuditEventDto, AuditVerifyResponse } from '@tiermode/shared-types';
 import { appendAuditEvent, type AuditEntry } from './append-audit-event';
 import { AuditEvent } from './audit-event.entity';
-import { firstBrokenEvent } from './audit-hash';
+import { SigningKey } from '../signing/signing-key';
+import { AuditHead } from './audit-head';
+import { auditHash, firstBrokenEvent } from './audit-hash';
 
 @Injectable()
 export class AuditService {
@@ -14,7 +16,11 @@ export class AuditService {
   // the caller gets a 409 to reload and try again. Nothing is lost silently.
   private tail: Promise<unknown> = Promise.resolve();
 
-  constructor(private readonly em: EntityManager) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly key: SigningKey,
+    private readonly head: AuditHead,
+  ) {}
 
   /**
    * Appends the event to the chain and flushes `em` with it, so the change and its record are
@@ -28,16 +34,17 @@ export class AuditService {
     guard?: (em: EntityManager) => Promise<void>,
   ): Promise<void> {
     const run = this.tail.then(async () => {
+      let event: AuditEvent;
       try {
         if (guard) {
           // The guard writes first, so the transaction holds SQLite's write lock before it
           // reads the last link: no other process can append in between.
           await em.begin();
           await guard(em);
-          await appendAuditEvent(em, entry);
+          event = await appendAuditEvent(em, this.key, entry);
           await em.commit();
         } else {
-          await appendAuditEvent(em, entry);
+          event = await appendAuditEvent(em, this.key, entry);
           await em.flush();
         }
       } catch (error) {
@@ -52,6 +59,7 @@ export class AuditService {
         }
         throw error;
       }
+      this.head.advance(event.seq, event.hash);
     });
     this.tail = run.catch(() => undefined);
     return run;
@@ -76,12 +84,52 @@ export class AuditService {
     return events.map(toDto);
   }
 
+  /** The whole trail: hashes and links, signatures, and the signed head, each on its own. */
   async verify(): Promise<AuditVerifyResponse> {
-    const events = await this.em.find(AuditEvent, {}, { orderBy: { seq: 'asc' } });
-    const brokenAt = firstBrokenEvent(events.map(toDto));
-    return { valid: brokenAt === null, events: events.length, brokenAt };
+    const events = (await this.em.find(AuditEvent, {}, { orderBy: { seq: 'asc' } })).map(toDto);
+    const brokenAt = firstBrokenEvent(events);
+    const unsigned = events.filter((e) => !e.signature).length;
+    const firstInvalid =
+      events.find((e) => e.signature && !this.key.verify('audit-event', e.hash, e.signature))
+        ?.seq ?? null;
+    const headStatus = this.head.check(events);
+    const problems = [
+      ...(brokenAt === null
+        ? []
+        : [`Event ${brokenAt} was changed or removed: its hash or link does not hold`]),
+      ...(unsigned === 0 ? [] : [`${unsigned} event(s) carry no signature`]),
+      ...(firstInvalid === null ? [] : [`Event ${firstInvalid}'s signature does not verify`]),
+      ...(headStatus === 'valid' ? [] : [HEAD_PROBLEMS[headStatus]]),
+    ];
+    return {
+      valid: problems.length === 0,
+      events: events.length,
+      brokenAt,
+      signatures: { valid: unsigned === 0 && firstInvalid === null, unsigned, firstInvalid },
+      head: { status: headStatus, seq: this.head.read()?.seq ?? null },
+      problems,
+    };
+  }
+
+  /** A calc's lock event: present, naming this seal's hash, signed, and whole. */
+  async lockEventStatus(
+    calculationId: string,
+    sealHash: string,
+  ): Promise<'valid' | 'missing' | 'invalid'> {
+    const found = await this.em.findOne(AuditEvent, { calculationId, action: 'locked' });
+    if (!found) return 'missing';
+    const event = toDto(found);
+    const { hash, signature, ...content } = event;
+    const whole = auditHash(content) === hash && this.key.verify('audit-event', hash, signature);
+    return whole && event.detail?.sealHash === sealHash ? 'valid' : 'invalid';
   }
 }
+
+const HEAD_PROBLEMS = {
+  missing: 'The signed head of the chain is missing, so deleted events at its end would not show',
+  invalid: 'The signed head of the chain does not match the events stored',
+  ahead: 'Events at the end of the chain were deleted: it ends before its signed head',
+} as const;
 
 function toDto(event: AuditEvent): AuditEventDto {
   return {
@@ -94,5 +142,6 @@ function toDto(event: AuditEvent): AuditEventDto {
     at: event.at,
     previousHash: event.previousHash,
     hash: event.hash,
+    signature: event.signature,
   };
 }

@@ -24,8 +24,9 @@ export class AuthService {
     private readonly throttle: LoginThrottleService,
   ) {}
 
-  async login(email: string, password: string, client: string): Promise<LoginResponse> {
-    this.throttle.assertNotBlocked(client);
+  async login(email: string, password: string, address: string): Promise<LoginResponse> {
+    const attempt = { account: email.trim().toLowerCase(), address };
+    this.throttle.assertNotBlocked(attempt);
     const user = await this.em.findOne(
       User,
       { email: email.trim().toLowerCase() },
@@ -33,7 +34,7 @@ export class AuthService {
     );
     const matches = await verifyPassword(password, user?.passwordHash ?? (await this.decoyHash));
     if (!user || !matches || !user.active) {
-      await this.throttle.recordFailure(client);
+      await this.throttle.recordFailure(attempt);
       throw new UnauthorizedException(BAD_CREDENTIALS);
     }
     return this.issue(user);
@@ -54,16 +55,16 @@ export class AuthService {
     user: User,
     currentPassword: string,
     newPassword: string,
-    client: string,
+    address: string,
   ): Promise<LoginResponse> {
-    this.throttle.assertNotBlocked(client);
+    const attempt = { account: user.email, address };
+    this.throttle.assertNotBlocked(attempt);
     await this.em.populate(user, ['passwordHash']);
     if (!(await verifyPassword(currentPassword, user.passwordHash))) {
-      await this.throttle.recordFailure(client);
+      await this.throttle.recordFailure(attempt);
       throw new UnauthorizedException('currentPassword is incorrect');
     }
-    user.passwordHash = await hashPassword(newPassword);
-    user.sessionVersion += 1;
+    user.replacePassword(await hashPassword(newPassword));
     await this.em.flush();
     return this.issue(user);
   }
@@ -72,8 +73,10 @@ export class AuthService {
    * Sets the password of the account a one-time link was mailed for. The link works once and
    * expires; a wrong or used one counts as a failed sign-in for throttling.
    */
-  async setPassword(token: string, password: string, client: string): Promise<void> {
-    this.throttle.assertNotBlocked(client);
+  async setPassword(token: string, password: string, address: string): Promise<void> {
+    // A link names no account until it is found: counted per address.
+    const attempt = { account: null, address };
+    this.throttle.assertNotBlocked(attempt);
     const user = await this.em.findOne(User, { setPasswordTokenHash: hashToken(token) });
     if (
       !user ||
@@ -81,15 +84,12 @@ export class AuthService {
       !user.setPasswordExpiresAt ||
       user.setPasswordExpiresAt < new Date()
     ) {
-      await this.throttle.recordFailure(client);
+      await this.throttle.recordFailure(attempt);
       throw new BadRequestException([
         'This set-password link is not valid, was used already, or has expired; ask your admin for a new one',
       ]);
     }
-    user.passwordHash = await hashPassword(password);
-    user.setPasswordTokenHash = null;
-    user.setPasswordExpiresAt = null;
-    user.sessionVersion += 1;
+    user.replacePassword(await hashPassword(password));
     await this.em.flush();
   }
 

@@ -25,6 +25,7 @@ import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { ReviewComment } from './review-comment.entity';
+import type { SigningKey } from '../signing/signing-key';
 import { sealOf } from './lock';
 
 @Entity({ tableName: 'calculations' })
@@ -148,7 +149,8 @@ export class Calculation {
 
   /** Comments may be added and resolved until the calc is of record. */
   assertNotOfRecord(): void {
-    if (this.isOfRecord()) throw new ConflictException(`${this.sealedPhrase()} and can never change`);
+    if (this.isOfRecord())
+      throw new ConflictException(`${this.sealedPhrase()} and can never change`);
   }
 
   /** Inputs, analysis, attachments and submission change only while the calc is a draft. */
@@ -189,9 +191,9 @@ export class Calculation {
    * Licensed, independent reviewer: seals a submitted calc as the calc of record, and
    * supersedes the locked revision it came from (loaded in `previousRevision`).
    */
-  lock(reviewer: User, statement: string, at: Date): SealDto {
+  lock(reviewer: User, statement: string, at: Date, key: SigningKey): SealDto {
     this.assertSubmitted('locked');
-    const seal = sealOf(this, reviewer, statement, at);
+    const seal = sealOf(this, reviewer, statement, at, key);
     this.seal = seal;
     this.status = 'locked';
     this.lockedAt = at;

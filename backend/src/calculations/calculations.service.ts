@@ -31,6 +31,7 @@ import { User } from '../users/user.entity';
 import { ReviewComment } from './review-comment.entity';
 import { sealedContentOf } from './lock';
 import { sealHash } from './seal';
+import { SigningKey } from '../signing/signing-key';
 import { Calculation } from './calculation.entity';
 import { calculationSubject, toCalculationDto } from './calculation.mapper';
 import type { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
@@ -98,6 +99,7 @@ export class CalculationsService {
     private readonly analysis: AnalysisService,
     private readonly audit: AuditService,
     private readonly mail: MailService,
+    private readonly key: SigningKey,
   ) {}
 
   async listForProject(ability: AppAbility, projectId: string): Promise<CalculationDto[]> {
@@ -280,7 +282,7 @@ export class CalculationsService {
       throw new ForbiddenException('Only a reviewer with a current licence may lock a calculation');
     }
     await this.assertIndependent(reviewer, calc);
-    const seal = calc.lock(reviewer, statement, new Date());
+    const seal = calc.lock(reviewer, statement, new Date(), this.key);
     const previous = calc.previousRevision;
     this.mail.queue(this.em, {
       to: [calc.author.email],
@@ -421,7 +423,50 @@ export class CalculationsService {
     if (!seal) throw new NotFoundException('This calculation is not locked, so it has no seal');
     const content = sealedContentOf(calc, seal);
     const recomputed = content ? sealHash(content) : '';
-    return { valid: recomputed === seal.hash, hash: seal.hash, recomputed, seal };
+    const hashValid = recomputed === seal.hash;
+    const signature = !seal.signature
+      ? 'absent'
+      : this.key.verify('seal', seal.hash, seal.signature)
+        ? 'valid'
+        : 'invalid';
+    const lockEvent = await this.audit.lockEventStatus(calc.id, seal.hash);
+    const problems = [
+      ...(hashValid ? [] : ['What is stored no longer matches the sealed hash']),
+      ...(signature === 'valid'
+        ? []
+        : [
+            signature === 'absent'
+              ? 'The seal carries no signature (made before seals were signed, or stripped)'
+              : "The seal's signature does not verify with this server's key",
+          ]),
+      ...(lockEvent === 'valid'
+        ? []
+        : [
+            lockEvent === 'missing'
+              ? 'The audit trail holds no lock event for this calc'
+              : 'The lock event on the audit trail was changed or names another seal',
+          ]),
+      ...(await this.supersessionProblems(calc)),
+    ];
+    return {
+      valid: problems.length === 0,
+      hash: seal.hash,
+      recomputed,
+      seal,
+      hashValid,
+      signature,
+      lockEvent,
+      problems,
+    };
+  }
+
+  /** A superseded calc must have a next revision that was locked after it. */
+  private async supersessionProblems(calc: Calculation): Promise<string[]> {
+    if (calc.status !== 'superseded') return [];
+    const next = await this.em.findOne(Calculation, { previousRevision: calc });
+    return next && next.isOfRecord()
+      ? []
+      : ['It is marked superseded, but no later revision of it is locked'];
   }
 
   /** A calc a reviewer is about to return or lock (its status is checked by the entity). */

@@ -2,8 +2,23 @@ import { createHash } from 'node:crypto';
 import canonicalize from 'canonicalize';
 import type { AnalysisResponse, CalculationInputs } from '@tiermode/shared-types';
 
-/** Everything a lock seals. */
+/**
+ * Everything a lock seals. A version-2 seal adds the calc's identity (see sealedContentOf); the
+ * first seals had only the fields below.
+ */
 export interface SealedContent {
+  sealVersion?: 2;
+  calculationId?: string;
+  projectId?: string;
+  projectName?: string;
+  title?: string;
+  revision?: number;
+  status?: string;
+  authorId?: string;
+  authorName?: string;
+  previousRevisionId?: string | null;
+  reviewerId?: string;
+  licenseExpiresOn?: string | null;
   inputs: CalculationInputs;
   analysis: AnalysisResponse;
   engineVersion: string;

@@ -1,7 +1,9 @@
 import 'reflect-metadata';
 import { MikroORM } from '@mikro-orm/sqlite';
 import { loadEnvironment } from '../config/environment';
+import { AuditHead } from '../audit/audit-head';
 import { prepareDatabase } from '../database/prepare-database';
+import { SigningKey } from '../signing/signing-key';
 import { createOrmConfig } from '../mikro-orm.config';
 
 /** `npm run migrate -w backend`: applies the committed migrations and seeds an empty database. */
@@ -9,7 +11,11 @@ async function main(): Promise<void> {
   const env = loadEnvironment(process.env);
   const orm = await MikroORM.init(createOrmConfig(env.databasePath));
   try {
-    const { applied, seed } = await prepareDatabase(orm, env);
+    const key = new SigningKey(env.sealPrivateKeyPem);
+    const { applied, seed } = await prepareDatabase(orm, env, {
+      key,
+      head: new AuditHead(env.auditHeadPath, key),
+    });
     console.log(
       `Database ${env.databasePath}: ${applied.length} migration(s) applied; seed: ${seed}`,
     );

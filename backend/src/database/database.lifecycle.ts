@@ -2,6 +2,8 @@ import { MikroORM } from '@mikro-orm/sqlite';
 import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { AppEnvironment } from '../config/environment';
+import { AuditHead } from '../audit/audit-head';
+import { SigningKey } from '../signing/signing-key';
 import { prepareDatabase } from './prepare-database';
 
 /** The server migrates and seeds before it listens, so a bare `npm run serve` also works. */
@@ -12,14 +14,20 @@ export class DatabaseLifecycle implements OnApplicationBootstrap {
   constructor(
     private readonly orm: MikroORM,
     private readonly config: ConfigService<AppEnvironment, true>,
+    private readonly key: SigningKey,
+    private readonly head: AuditHead,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    const { applied, seed } = await prepareDatabase(this.orm, {
-      demoMode: this.config.get('demoMode', { infer: true }),
-      adminEmail: this.config.get('adminEmail', { infer: true }),
-      adminPassword: this.config.get('adminPassword', { infer: true }),
-    });
+    const { applied, seed } = await prepareDatabase(
+      this.orm,
+      {
+        demoMode: this.config.get('demoMode', { infer: true }),
+        adminEmail: this.config.get('adminEmail', { infer: true }),
+        adminPassword: this.config.get('adminPassword', { infer: true }),
+      },
+      { key: this.key, head: this.head },
+    );
     if (applied.length > 0) this.logger.log(`Applied migrations: ${applied.join(', ')}`);
     if (seed !== 'nothing-to-do') this.logger.log(`Seed: ${seed}`);
   }

@@ -3,6 +3,7 @@ import type { CalculationInputs } from '@tiermode/shared-types';
 import { analyse } from '../analysis/engine/analyse';
 import { asce7TwoPeriodSpectrum } from '../analysis/engine/spectrum-generators';
 import { appendAuditEvent } from '../audit/append-audit-event';
+import type { SigningKey } from '../signing/signing-key';
 import { Calculation } from '../calculations/calculation.entity';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
@@ -48,7 +49,7 @@ function laboratory(): CalculationInputs {
  * north-south draft of the laboratory waits for its code-basis checks. Each step is on the
  * audit trail, as if done through the app.
  */
-export async function seedDemoCalculations(em: EntityManager): Promise<void> {
+export async function seedDemoCalculations(em: EntityManager, key: SigningKey): Promise<void> {
   const designer = await em.findOneOrFail(User, { email: 'designer@tiermode.test' });
   const reviewer = await em.findOneOrFail(User, { email: 'reviewer@tiermode.test' });
   const start = Date.now() - 3 * 24 * 3600 * 1000;
@@ -82,7 +83,7 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
       ['analysed', calc.analysedAt],
       ['submitted', calc.submittedAt],
     ] as const) {
-      await appendAuditEvent(em, {
+      await appendAuditEvent(em, key, {
         calculationId: calc.id,
         actor: designer,
         action,
@@ -105,8 +106,9 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
     reviewer,
     'Accepted as the calc of record for the permit set (demo).',
     lockedAt,
+    key,
   );
-  await appendAuditEvent(em, {
+  await appendAuditEvent(em, key, {
     calculationId: housing.id,
     actor: reviewer,
     action: 'locked',
@@ -135,7 +137,7 @@ export async function seedDemoCalculations(em: EntityManager): Promise<void> {
     author: designer,
     inputsChangedAt: created,
   });
-  await appendAuditEvent(em, {
+  await appendAuditEvent(em, key, {
     calculationId: draft.id,
     actor: designer,
     action: 'created',

@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { AppEnvironment } from '../config/environment';
-import { passwordProblem } from '../users/password-policy';
+import { passwordProblem, personalWords } from '../users/password-policy';
 import { hashPassword } from '../users/password-hasher';
 import { User } from '../users/user.entity';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-accounts';
@@ -36,7 +36,7 @@ export async function seedAccounts(
         'DEMO=off on an empty database: set ADMIN_EMAIL and ADMIN_PASSWORD to create the first admin',
       );
     }
-    const problem = passwordProblem('ADMIN_PASSWORD', adminPassword);
+    const problem = passwordProblem('ADMIN_PASSWORD', adminPassword, personalWords(adminEmail));
     if (problem) throw new Error(problem);
     em.create(User, {
       email: adminEmail.trim().toLowerCase(),

@@ -93,7 +93,9 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
       from: m.from,
       to: m.to,
       subject: m.subject,
-      text: m.text,
+      // The mail itself carries the link; the outbox shows it masked, so an admin reading it
+      // cannot take over the account.
+      text: maskSetPasswordLinks(m.text),
       attempts: m.attempts,
       lastError: m.lastError,
       createdAt: m.createdAt.toISOString(),
@@ -143,4 +145,9 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     em.create(MailMessage, { status: 'received', ...mail, sentAt: new Date() });
     await em.flush();
   }
+}
+
+/** `…/set-password?token=abc…` becomes `…/set-password?token=(hidden)`. */
+export function maskSetPasswordLinks(text: string): string {
+  return text.replace(/(\/set-password\?token=)[A-Za-z0-9_-]+/g, '$1(hidden)');
 }

@@ -12,6 +12,7 @@ import { Migration20261202012253 } from './Migration20261202012253';
 import { Migration20261202015831 } from './Migration20261202015831';
 import { Migration20261202022030 } from './Migration20261202022030';
 import { Migration20261203073309 } from './Migration20261203073309';
+import { Migration20261203074322 } from './Migration20261203074322';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -28,4 +29,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202015831', class: Migration20261202015831 },
   { name: 'Migration20261202022030', class: Migration20261202022030 },
   { name: 'Migration20261203073309', class: Migration20261203073309 },
+  { name: 'Migration20261203074322', class: Migration20261203074322 },
 ];

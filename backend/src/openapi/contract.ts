@@ -37,6 +37,7 @@ export interface ContractTypes {
   ReturnCalculationRequest: C.ReturnCalculationRequest;
   ReviewCommentDto: C.ReviewCommentDto;
   SealCheckResponse: C.SealCheckResponse;
+  SealPublicKeyResponse: C.SealPublicKeyResponse;
   SetPasswordRequest: C.SetPasswordRequest;
   SpectrumGenerateRequest: C.SpectrumGenerateRequest;
   SpectrumGenerateResponse: C.SpectrumGenerateResponse;

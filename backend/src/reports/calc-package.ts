@@ -47,13 +47,19 @@ function cover(doc: Doc, calc: CalculationDto, check: SealCheckResponse | null, 
   ]);
   doc.moveDown(0.5);
   if (calc.seal) {
-    keyValues(doc, [['Seal (SHA-256)', calc.seal.hash]]);
+    keyValues(doc, [
+      ['Seal (SHA-256)', calc.seal.hash],
+      ['Signature (Ed25519)', calc.seal.signature ?? 'none (sealed before seals were signed)'],
+      ['Signing key id', calc.seal.keyId ?? '-'],
+    ]);
     write(
       doc,
       check?.valid
-        ? 'Verification: the hash recomputed from the stored data when this package was made matches the seal. ' +
-            'To verify a copy, open the calc in the product and check that its seal panel shows the same hash, valid.'
-        : 'WARNING: the stored data no longer matches the seal; this calc was changed outside the application. Do not rely on it.',
+        ? 'Verification: when this package was made, the hash recomputed from the stored data matched the seal, ' +
+            "the signature verified with the server's key and the lock is on the audit trail. To check the signature " +
+            'yourself, fetch the public key from /api/seal/public-key and verify the signature over the text ' +
+            '"tiermode-seal:" followed by the hash (the README shows the openssl command).'
+        : `WARNING: this seal does not verify (${check?.problems.join('; ') || 'unknown reason'}). Do not rely on this calc.`,
       { width: 495 },
     );
   } else {

@@ -66,4 +66,21 @@ export class User {
 
   @Property({ type: 'integer', version: true })
   version!: number;
+
+  /**
+   * A new password, by whatever route: every session ends and any set-password link dies, so a
+   * link mailed earlier cannot take the account back.
+   */
+  replacePassword(passwordHash: string): void {
+    this.passwordHash = passwordHash;
+    this.sessionVersion += 1;
+    this.setPasswordTokenHash = null;
+    this.setPasswordExpiresAt = null;
+  }
+
+  /** A new set-password link (its token's hash and expiry); the one before stops working. */
+  issueSetPasswordLink(link: { tokenHash: string; expiresAt: Date }): void {
+    this.setPasswordTokenHash = link.tokenHash;
+    this.setPasswordExpiresAt = link.expiresAt;
+  }
 }

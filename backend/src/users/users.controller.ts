@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import type { UserDto } from '@tiermode/shared-types';
 import type { AppAbility } from '../authorization/app-ability';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
@@ -43,5 +43,18 @@ export class UsersController {
     @Body() body: UpdateUserDto,
   ): Promise<UserDto> {
     return this.users.update(ability, id, body);
+  }
+
+  @ApiContract({
+    summary: 'Mail a person a new set-password link; earlier links stop working',
+    returns: 'UserDto',
+  })
+  @Post(':id/set-password-link')
+  @HttpCode(200)
+  sendSetPasswordLink(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<UserDto> {
+    return this.users.sendSetPasswordLink(ability, id);
   }
 }

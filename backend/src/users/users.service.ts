@@ -45,21 +45,48 @@ export class UsersService {
       licenseExpiresOn: body.licenseExpiresOn ?? null,
     });
     // The new person also gets a one-time link to choose a password of their own.
-    const link = newSetPasswordToken();
-    user.setPasswordTokenHash = link.tokenHash;
-    user.setPasswordExpiresAt = link.expiresAt;
-    const url = `${this.config.get('publicUrl', { infer: true })}/set-password?token=${link.token}`;
-    this.mail.queue(this.em, {
-      to: [user.email],
-      subject: 'Your Tiermode account',
-      text:
-        `${user.name}, an account has been made for you in Tiermode (${user.role}).\n\n` +
-        `Choose your password here; the link works once, until ${link.expiresAt.toISOString()}:\n${url}\n\n` +
-        'Your admin can also tell you the first password they set.',
-    });
+    this.mailSetPasswordLink(
+      user,
+      'Your Tiermode account',
+      `${user.name}, an account has been made for you in Tiermode (${user.role}).`,
+      'Your admin can also tell you the first password they set.',
+    );
     await this.em.flush();
     this.mail.kick();
     return toUserDto(user);
+  }
+
+  /** Admin: mails a new set-password link; the one mailed before stops working. */
+  async sendSetPasswordLink(ability: AppAbility, id: string): Promise<UserDto> {
+    const user = await this.em.findOne(User, { id });
+    if (!user) throw new NotFoundException(`No user with id ${id}`);
+    ForbiddenError.from(ability).throwUnlessCan('update', subject('User', user));
+    if (!user.active) {
+      throw new ConflictException('This account is deactivated; activate it before sending a link');
+    }
+    this.mailSetPasswordLink(
+      user,
+      'Choose a new Tiermode password',
+      `${user.name}, your admin sent you a link to choose a new Tiermode password.`,
+      'Any link sent before this one no longer works.',
+    );
+    await this.em.flush();
+    this.mail.kick();
+    return toUserDto(user);
+  }
+
+  private mailSetPasswordLink(user: User, subject: string, opening: string, closing: string): void {
+    const link = newSetPasswordToken();
+    user.issueSetPasswordLink(link);
+    const url = `${this.config.get('publicUrl', { infer: true })}/set-password?token=${link.token}`;
+    this.mail.queue(this.em, {
+      to: [user.email],
+      subject,
+      text:
+        `${opening}\n\n` +
+        `Choose your password here; the link works once, until ${link.expiresAt.toISOString()}:\n${url}\n\n` +
+        closing,
+    });
   }
 
   async update(ability: AppAbility, id: string, body: UpdateUserDto): Promise<UserDto> {
@@ -99,10 +126,7 @@ export class UsersService {
       // Deactivation ends every session at once; the JWT strategy also checks `active`.
       user.sessionVersion += 1;
     }
-    if (body.password !== undefined) {
-      user.passwordHash = await hashPassword(body.password);
-      user.sessionVersion += 1;
-    }
+    if (body.password !== undefined) user.replacePassword(await hashPassword(body.password));
     await this.em.flush();
     return toUserDto(user);
   }

@@ -2,6 +2,8 @@ import type { INestApplication } from '@nestjs/common';
 import type { CalculationInputs, MailMessageDto } from '@tiermode/shared-types';
 import request from 'supertest';
 import type { App } from 'supertest/types';
+import { MikroORM } from '@mikro-orm/sqlite';
+import { MailMessage } from '../../src/mail/mail-message.entity';
 import { MailService } from '../../src/mail/mail.service';
 import { createTestApp, tokenFor, type DemoRole } from './test-app';
 
@@ -60,7 +62,10 @@ export const binaryBody: Parameters<request.Test['parse']>[0] = (res, done) => {
   res.on('end', () => done(null, Buffer.concat(chunks)));
 };
 
-/** Waits (up to 5 s) for a mail the local catcher received that `match` picks out. */
+/**
+ * Waits (up to 5 s) for a mail the local catcher received that `match` picks out, and returns it
+ * as its recipient got it: the outbox masks set-password links, the stored mail does not.
+ */
 export async function waitForMail(
   app: INestApplication<App>,
   adminToken: string,
@@ -74,7 +79,10 @@ export async function waitForMail(
         .set('Authorization', `Bearer ${adminToken}`)
     ).body as MailMessageDto[];
     const found = outbox.find((m) => m.status === 'received' && match(m));
-    if (found) return found;
+    if (found) {
+      const stored = await app.get(MikroORM).em.fork().findOneOrFail(MailMessage, { id: found.id });
+      return { ...found, text: stored.text };
+    }
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error('The expected mail did not reach the catcher');

@@ -12,12 +12,25 @@ const seal: SealDto = {
   licenseJurisdiction: 'Invented State',
   statement: 'Accepted (test).',
   lockedAt: '2026-11-30T10:00:00.000Z',
+  sealVersion: 2,
+  signature: 'c2ln',
+  keyId: '0123456789abcdef',
 };
 const calc = { id: 'c1', seal } as CalculationDto;
 
 function answer(check: Partial<SealCheckResponse>) {
   vi.spyOn(api, 'get').mockResolvedValue({
-    data: { valid: true, hash: seal.hash, recomputed: seal.hash, seal, ...check },
+    data: {
+      valid: true,
+      hash: seal.hash,
+      recomputed: seal.hash,
+      seal,
+      hashValid: true,
+      signature: 'valid',
+      lockEvent: 'valid',
+      problems: [],
+      ...check,
+    },
   });
 }
 
@@ -31,15 +44,27 @@ describe('SealPanel', () => {
     expect(screen.getByText('Ines Reviewer')).toBeInTheDocument();
     expect(screen.getByText('SE-1 (invented), Invented State')).toBeInTheDocument();
     expect(screen.getByText(seal.hash)).toBeInTheDocument();
+    expect(
+      screen.getByText('verifies with the server’s key (Ed25519, key 0123456789abcdef)'),
+    ).toBeInTheDocument();
+    expect(screen.getByText('on the audit trail, signed')).toBeInTheDocument();
     expect(api.get).toHaveBeenCalledWith('/calculations/c1/seal');
   });
 
   it('warns, with the recomputed hash, when what is stored no longer matches the seal', async () => {
-    answer({ valid: false, recomputed: 'b'.repeat(64) });
+    answer({
+      valid: false,
+      recomputed: 'b'.repeat(64),
+      hashValid: true,
+      signature: 'invalid',
+      problems: ["The seal's signature does not verify with this server's key"],
+    });
     renderWithProviders(<SealPanel calc={calc} />);
     const alert = await screen.findByRole('alert');
-    expect(alert).toHaveTextContent('The seal does not match what is stored');
+    expect(alert).toHaveTextContent('The seal does not hold');
+    expect(alert).toHaveTextContent("The seal's signature does not verify with this server's key.");
     expect(alert).toHaveTextContent('b'.repeat(64));
+    expect(screen.getByText('does not verify (Ed25519, key 0123456789abcdef)')).toBeInTheDocument();
     expect(screen.queryByText(/The seal is valid/)).not.toBeInTheDocument();
   });
 });

@@ -6,9 +6,21 @@ import { useSeal } from '../api/calculations';
 const when = (iso: string) =>
   new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
+const SIGNATURE = {
+  valid: 'verifies with the server’s key',
+  invalid: 'does not verify',
+  absent: 'none (sealed before seals were signed, or removed)',
+} as const;
+const LOCK_EVENT = {
+  valid: 'on the audit trail, signed',
+  missing: 'missing from the audit trail',
+  invalid: 'changed, or names another seal',
+} as const;
+
 /**
- * The seal of a locked calc: who accepted it, under which licence, when, the statement and the
- * hash, and whether the hash recomputed from what is stored still matches.
+ * The seal of a locked calc: who accepted it, under which licence, when, the statement, the hash
+ * and its signature, and whether each still holds: the hash recomputed from what is stored, the
+ * signature, and the lock's event on the audit trail.
  */
 export function SealPanel({ calc }: { calc: CalculationDto }) {
   const check = useSeal(calc.id, calc.seal !== null);
@@ -28,15 +40,16 @@ export function SealPanel({ calc }: { calc: CalculationDto }) {
         )}
         {check.data?.valid === true && (
           <Alert severity="success" role="status">
-            The seal is valid: the stored inputs and results are exactly those the reviewer locked.
+            The seal is valid: the stored inputs and results are exactly those the reviewer locked,
+            the signature verifies and the lock is on the audit trail.
           </Alert>
         )}
         {check.data?.valid === false && (
           <Alert severity="error" role="alert">
-            <AlertTitle>The seal does not match what is stored</AlertTitle>
-            This calc was changed after it was locked, outside the application. Do not rely on it:
-            tell your admin, and treat the printed, signed calc package as the record. Recomputed
-            hash: <code>{check.data.recomputed}</code>
+            <AlertTitle>The seal does not hold</AlertTitle>
+            {check.data.problems.join('. ')}. This calc was changed after it was locked, outside the
+            application. Do not rely on it: tell your admin, and treat the printed, signed calc
+            package as the record. Recomputed hash: <code>{check.data.recomputed}</code>
           </Alert>
         )}
         <Box
@@ -63,6 +76,13 @@ export function SealPanel({ calc }: { calc: CalculationDto }) {
           <dd>
             <code style={{ wordBreak: 'break-all' }}>{seal.hash}</code>
           </dd>
+          <dt>Signature</dt>
+          <dd>
+            {check.data ? SIGNATURE[check.data.signature] : '…'}
+            {seal.keyId && ` (Ed25519, key ${seal.keyId})`}
+          </dd>
+          <dt>Lock event</dt>
+          <dd>{check.data ? LOCK_EVENT[check.data.lockEvent] : '…'}</dd>
         </Box>
       </CardContent>
     </Card>
