@@ -1,5 +1,5 @@
 import { request as httpRequest } from 'node:http';
-import type { AddressInfo } from 'node:net';
+import type { AddressInfo, Server } from 'node:net';
 import type { INestApplication } from '@nestjs/common';
 import type { App } from 'supertest/types';
 import { DEMO_PASSWORD } from '../src/database/demo-accounts';
@@ -17,7 +17,7 @@ describe('Throttling of failed sign-ins', () => {
   beforeAll(async () => {
     app = await createTestApp();
     await app.listen(0, '127.0.0.1');
-    port = (app.getHttpServer().address() as AddressInfo).port;
+    port = ((app.getHttpServer() as unknown as Server).address() as AddressInfo).port;
   });
   afterAll(() => app.close());
 
