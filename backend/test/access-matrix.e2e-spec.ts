@@ -1,5 +1,5 @@
 import type { Response } from 'supertest';
-import { sampleInputs, useSignedInApp } from './support/fixtures';
+import { sampleInputs, useSignedInApp, ONE_PAGE_PDF } from './support/fixtures';
 import { routesOf } from './support/routes';
 import { signIn, type DemoRole } from './support/test-app';
 
@@ -482,7 +482,7 @@ const MATRIX: Cell[] = [
       http()
         .post(`/api/calculations/${await draft()}/attachments`)
         .set(as(c))
-        .attach('file', Buffer.from('%PDF-1.4\n%%EOF\n'), 'letter.pdf'),
+        .attach('file', ONE_PAGE_PDF, 'letter.pdf'),
   },
   {
     route: 'GET /api/attachments/:id',
@@ -492,11 +492,34 @@ const MATRIX: Cell[] = [
       const res = await http()
         .post(`/api/calculations/${await draft()}/attachments`)
         .set(as('designer'))
-        .attach('file', Buffer.from('%PDF-1.4\n%%EOF\n'), 'letter.pdf')
+        .attach('file', ONE_PAGE_PDF, 'letter.pdf')
         .expect(201);
       const id = (res.body as { attachments: { id: string }[] }).attachments[0].id;
       return http().get(`/api/attachments/${id}`).set(as(c));
     },
+  },
+  {
+    route: 'DELETE /api/attachments/:id',
+    allowed: ['designer'],
+    ok: 200,
+    call: async (c) => {
+      const res = await http()
+        .post(`/api/calculations/${await draft()}/attachments`)
+        .set(as('designer'))
+        .attach('file', ONE_PAGE_PDF, 'letter.pdf')
+        .expect(201);
+      const id = (res.body as { attachments: { id: string }[] }).attachments[0].id;
+      return http().delete(`/api/attachments/${id}`).set(as(c));
+    },
+  },
+  {
+    route: 'DELETE /api/calculations/:id',
+    allowed: ['designer'],
+    ok: 204,
+    call: async (c) =>
+      http()
+        .delete(`/api/calculations/${await draft()}`)
+        .set(as(c)),
   },
   {
     route: 'POST /api/checks',

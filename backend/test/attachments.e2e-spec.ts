@@ -1,12 +1,15 @@
 import { createHash } from 'node:crypto';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { ConfigService } from '@nestjs/config';
 import { MikroORM } from '@mikro-orm/sqlite';
 import type { CalculationDto } from '@tiermode/shared-types';
-import { binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
+import { binaryBody, sampleInputs, useSignedInApp, ONE_PAGE_PDF } from './support/fixtures';
 
 const { state, http, as } = useSignedInApp();
 
 // The smallest well-formed files of each kind (invented content).
-const PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
+const PDF = ONE_PAGE_PDF;
 // A complete 1 x 1 PNG (signature, IHDR, IDAT, IEND; ISO/IEC 15948).
 const PNG = Buffer.from(
   '89504e470d0a1a0a0000000d49484452000000010000000108060000001f15c4890000000b49444154789c6360000200000500017a5eab3f0000000049454e44ae426082',
@@ -87,11 +90,25 @@ describe('Attachments', () => {
     const imageZip = await attach(calc.id, Buffer.concat([PNG, zipTail]), 'plan.png').expect(400);
     expect(imageZip.body.message).toEqual(['file has other data after the end of the PNG']);
     const scripted = Buffer.from(
-      '%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction<</S/JavaScript/JS(app.alert(1))>>>>endobj\n%%EOF\n',
+      ONE_PAGE_PDF.toString('latin1').replace(
+        '/Type/Catalog',
+        '/Type/Catalog/OpenAction<</S/J#61vaScript/JS(app.alert(1))>>',
+      ),
+      'latin1',
     );
     const pdf = await attach(calc.id, scripted, 'letter.pdf').expect(400);
     expect(pdf.body.message).toEqual([
-      'file contains active content (/JavaScript), which is not kept with a calc',
+      'file contains JavaScript (/JavaScript), which is not kept with a calc; print it to a plain PDF first',
+    ]);
+    const linked = Buffer.from(
+      ONE_PAGE_PDF.toString('latin1').replace(
+        '/Type/Catalog',
+        '/Type/Catalog/OpenAction<</S/URI/URI(https://example.test)>>',
+      ),
+      'latin1',
+    );
+    expect((await attach(calc.id, linked, 'letter.pdf').expect(400)).body.message).toEqual([
+      'file contains a web link (/URI), which is not kept with a calc; print it to a plain PDF first',
     ]);
     const page = Buffer.concat([
       PNG.subarray(0, 33),
@@ -140,5 +157,94 @@ describe('Attachments', () => {
       ]);
     const broken = await http().get(`/api/calculations/${calc.id}/seal`).set(as('reviewer'));
     expect(broken.body.valid).toBe(false);
+  });
+});
+
+describe('File names, and taking files and drafts back', () => {
+  const history = async (id: string) =>
+    (await state.app
+      .get(MikroORM)
+      .em.getConnection()
+      .execute('select action, detail from audit_events where calculation_id = ? order by seq', [
+        id,
+      ])) as { action: string; detail: string | null }[];
+
+  it('keeps a file name in UTF-8, and gives it back in the download header (RFC 8187)', async () => {
+    const calc = await draft();
+    const res = await attach(calc.id, PDF, 'Übersicht-Straße.pdf').expect(201);
+    const [file] = (res.body as CalculationDto).attachments;
+    expect(file.fileName).toBe('Übersicht-Straße.pdf');
+    const back = await http().get(`/api/attachments/${file.id}`).set(as('designer')).expect(200);
+    expect(back.headers['content-disposition']).toContain(
+      "filename*=UTF-8''%C3%9Cbersicht-Stra%C3%9Fe.pdf",
+    );
+  });
+
+  it('lets the draft’s author remove an attachment, with the file and on the audit trail', async () => {
+    const calc = await draft();
+    const added = await attach(calc.id, PDF, 'old letter.pdf').expect(201);
+    const [file] = (added.body as CalculationDto).attachments;
+    const [{ stored_name: storedName }] = (await state.app
+      .get(MikroORM)
+      .em.getConnection()
+      .execute('select stored_name from attachments where id = ?', [file.id])) as {
+      stored_name: string;
+    }[];
+    const onDisk = join(state.app.get(ConfigService).get<string>('attachmentsDir')!, storedName);
+    expect(existsSync(onDisk)).toBe(true);
+    await http().delete(`/api/attachments/${file.id}`).set(as('reviewer')).expect(403);
+    const removed = await http()
+      .delete(`/api/attachments/${file.id}`)
+      .set(as('designer'))
+      .expect(200);
+    expect((removed.body as CalculationDto).attachments).toEqual([]);
+    await http().get(`/api/attachments/${file.id}`).set(as('designer')).expect(404);
+    expect(existsSync(onDisk)).toBe(false);
+    const events = await history(calc.id);
+    expect(events.map((e) => e.action)).toEqual(['created', 'attached', 'attachment removed']);
+    expect(JSON.parse(events[2].detail!)).toEqual({
+      fileName: 'old letter.pdf',
+      sha256: createHash('sha256').update(PDF).digest('hex'),
+    });
+  });
+
+  it('keeps attachments once the calc is submitted', async () => {
+    const calc = await draft();
+    const added = await attach(calc.id, PDF, 'letter.pdf').expect(201);
+    const [file] = (added.body as CalculationDto).attachments;
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    const refused = await http()
+      .delete(`/api/attachments/${file.id}`)
+      .set(as('designer'))
+      .expect(409);
+    expect(refused.body.message[0]).toMatch(/submitted for review/);
+  });
+
+  it('lets the author delete a scratch draft, never one that went to review', async () => {
+    const scratch = await draft();
+    await attach(scratch.id, PDF, 'letter.pdf').expect(201);
+    await http().delete(`/api/calculations/${scratch.id}`).set(as('reviewer')).expect(403);
+    await http().delete(`/api/calculations/${scratch.id}`).set(as('designer')).expect(204);
+    await http().get(`/api/calculations/${scratch.id}`).set(as('designer')).expect(404);
+    const events = await history(scratch.id);
+    expect(events.map((e) => e.action)).toEqual(['created', 'attached', 'deleted']);
+    expect(JSON.parse(events[2].detail!)).toMatchObject({ title: 'With files', revision: 1 });
+
+    const reviewed = await draft();
+    await http().post(`/api/calculations/${reviewed.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${reviewed.id}/submit`).set(as('designer')).expect(200);
+    await http()
+      .post(`/api/calculations/${reviewed.id}/return`)
+      .set(as('reviewer'))
+      .send({ comment: 'Check storey 2.' })
+      .expect(200);
+    const kept = await http()
+      .delete(`/api/calculations/${reviewed.id}`)
+      .set(as('designer'))
+      .expect(409);
+    expect(kept.body.message).toEqual([
+      'This draft went to review once, so it is kept with its review; only a draft never submitted can be deleted',
+    ]);
   });
 });

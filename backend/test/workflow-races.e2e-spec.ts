@@ -1,5 +1,5 @@
 import type { AuditEventDto, CalculationDto } from '@tiermode/shared-types';
-import { sampleInputs, useSignedInApp } from './support/fixtures';
+import { sampleInputs, useSignedInApp, ONE_PAGE_PDF } from './support/fixtures';
 
 /**
  * State changes that arrive at the same moment: exactly one wins, the others get 409, and
@@ -8,7 +8,6 @@ import { sampleInputs, useSignedInApp } from './support/fixtures';
  */
 const { http, as } = useSignedInApp();
 const PARALLEL = 50;
-const MINIMAL_PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
 
 async function submittedCalc(title: string): Promise<CalculationDto> {
   const project = await http()
@@ -133,7 +132,7 @@ describe(`${PARALLEL} requests at once`, () => {
       http()
         .post(`/api/calculations/${id}/attachments`)
         .set(as('designer'))
-        .attach('file', MINIMAL_PDF, `letter-${i}.pdf`),
+        .attach('file', ONE_PAGE_PDF, `letter-${i}.pdf`),
     );
     const submit = http().post(`/api/calculations/${id}/submit`).set(as('designer'));
     const [submitted, ...results] = await Promise.all([submit, ...uploads]);

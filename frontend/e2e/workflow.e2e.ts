@@ -100,7 +100,10 @@ describe('The review workflow, across the four roles', () => {
       await page.getByLabel('Attachment file').setInputFiles({
         name: 'geotechnical-letter.pdf',
         mimeType: 'application/pdf',
-        buffer: Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n'),
+        buffer: Buffer.from(
+          '%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[3 0 R]/Count 1>>endobj\n' +
+            '3 0 obj<</Type/Page/Parent 2 0 R/MediaBox[0 0 595 842]>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+        ),
       });
       await page
         .getByRole('grid', { name: 'Attachments' })

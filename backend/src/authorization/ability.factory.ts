@@ -46,6 +46,8 @@ export class AbilityFactory {
           status: 'draft',
         });
         can('revise', 'Calculation', { projectMemberIds: user.id, status: 'locked' });
+        // A draft's author may throw it away (the entity refuses one that went to review).
+        can('delete', 'Calculation', { authorId: user.id, status: 'draft' });
         // Designers of the project answer and resolve the review's comments.
         can('comment', 'Calculation', { projectMemberIds: user.id });
         can('update', 'ReviewComment', { projectMemberIds: user.id });

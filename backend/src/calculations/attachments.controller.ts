@@ -1,5 +1,7 @@
+import contentDisposition from 'content-disposition';
 import {
   Controller,
+  Delete,
   Get,
   Param,
   Post,
@@ -44,6 +46,20 @@ export class AttachmentsController {
   }
 
   @ApiContract({
+    summary: 'Remove an attachment from a draft (its author only)',
+    returns: 'CalculationDto',
+  })
+  @Delete('attachments/:id')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  remove(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<CalculationDto> {
+    return this.attachments.remove(ability, user, id);
+  }
+
+  @ApiContract({
     summary: 'Download an attachment (its SHA-256 is checked first)',
     file: 'application/octet-stream',
   })
@@ -56,7 +72,13 @@ export class AttachmentsController {
     const { attachment, bytes } = await this.attachments.download(ability, id);
     return new StreamableFile(bytes, {
       type: attachment.contentType,
-      disposition: `attachment; filename="${attachment.fileName.replace(/[^\w.\- ]/g, '_')}"`,
+      // An ASCII fallback and the UTF-8 name (RFC 6266 with RFC 8187's filename*).
+      disposition: contentDisposition(attachment.fileName, {
+        fallback: attachment.fileName
+          .normalize('NFKD')
+          .replace(/[\u0300-\u036f]/g, '')
+          .replace(/[^\x20-\x7e]/g, '_'),
+      }),
     });
   }
 }

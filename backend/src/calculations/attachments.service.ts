@@ -1,11 +1,12 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { ForbiddenError, subject } from '@casl/ability';
 import { EntityManager } from '@mikro-orm/sqlite';
 import {
   BadRequestException,
   ConflictException,
+  ForbiddenException,
   Injectable,
   NotFoundException,
 } from '@nestjs/common';
@@ -15,6 +16,7 @@ import type { AppAbility } from '../authorization/app-ability';
 import { AuditService } from '../audit/audit.service';
 import type { AppEnvironment } from '../config/environment';
 import { detectKind, polyglotProblem } from '../imports/file-checks';
+import { pdfActiveContent } from '../imports/pdf-active-content';
 import type { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { calculationSubject, toAttachmentDto } from './calculation.mapper';
@@ -57,7 +59,9 @@ export class AttachmentsService {
         `file must be a PDF, PNG or JPEG (judged by its content, not its name; this one is ${kind === 'xlsx' ? 'a ZIP archive' : kind === 'text' ? 'text' : 'none of them'})`,
       ]);
     }
-    const problem = polyglotProblem(kind, file.buffer);
+    const problem =
+      polyglotProblem(kind, file.buffer) ??
+      (kind === 'pdf' ? await pdfActiveContent(file.buffer) : null);
     if (problem) throw new BadRequestException([`file ${problem}`]);
     const { contentType, extension } = KINDS[kind];
     const attachment = this.em.create(Attachment, {
@@ -88,6 +92,36 @@ export class AttachmentsService {
       stillIn(calc, ['draft']),
     );
     return this.calculations.get(ability, calc.id);
+  }
+
+  /** The calc's author removes an attachment from a draft; the audit trail records it. */
+  async remove(ability: AppAbility, actor: User, id: string): Promise<CalculationDto> {
+    const found = await this.em.findOne(Attachment, { id }, { populate: ['calculation'] });
+    if (!found) throw new NotFoundException(`No attachment with id ${id}`);
+    const calc = await this.calculations.loadForWrite(ability, found.calculation.id, 'update');
+    if (calc.author.id !== actor.id) {
+      throw new ForbiddenException('Only the calc’s author may remove its attachments');
+    }
+    const attachment = calc.attachments.getItems().find((a) => a.id === id)!;
+    this.em.remove(attachment);
+    await this.audit.commit(
+      this.em,
+      {
+        calculationId: calc.id,
+        actor,
+        action: 'attachment removed',
+        detail: { fileName: attachment.fileName, sha256: attachment.sha256 },
+      },
+      stillIn(calc, ['draft']),
+    );
+    await this.removeFiles([attachment.storedName]);
+    return this.calculations.get(ability, calc.id);
+  }
+
+  /** Removes stored files once their rows are gone; a file left behind is only unreferenced. */
+  async removeFiles(storedNames: string[]): Promise<void> {
+    const dir = this.config.get('attachmentsDir', { infer: true });
+    await Promise.all(storedNames.map((name) => rm(join(dir, name), { force: true })));
   }
 
   async download(

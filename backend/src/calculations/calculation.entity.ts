@@ -217,6 +217,16 @@ export class Calculation {
     return next;
   }
 
+  /** A scratch draft, never submitted, may be deleted; one that went to review is kept. */
+  assertDeletable(): void {
+    this.assertWritable();
+    if (this.submittedAt !== null) {
+      throw new ConflictException(
+        'This draft went to review once, so it is kept with its review; only a draft never submitted can be deleted',
+      );
+    }
+  }
+
   /** Only the locked revision (the current calc of record) has a next revision. */
   assertRevisable(): void {
     if (this.status !== 'locked') {

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import type {
   AnalysisResponse,
   AuditEventDto,
@@ -10,6 +10,7 @@ import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';
 import { UuidParam } from '../common/pipes/uuid-param.pipe';
 import type { User } from '../users/user.entity';
+import { AttachmentsService } from './attachments.service';
 import { CalculationsService } from './calculations.service';
 import { CreateCalculationDto, UpdateCalculationDto } from './dto/calculation.dto';
 import { CreateCommentDto, UpdateCommentDto } from './dto/comment.dto';
@@ -19,7 +20,10 @@ import { Expensive } from '../rate-limit/expensive.decorator';
 
 @Controller()
 export class CalculationsController {
-  constructor(private readonly calculations: CalculationsService) {}
+  constructor(
+    private readonly calculations: CalculationsService,
+    private readonly attachments: AttachmentsService,
+  ) {}
 
   @ApiContract({ summary: 'Calcs of a project', returns: 'CalculationDto[]' })
   @Get('projects/:id/calculations')
@@ -199,5 +203,22 @@ export class CalculationsController {
     @Body() body: UpdateCommentDto,
   ): Promise<CalculationDto> {
     return this.calculations.resolveComment(ability, user, id, body.resolved);
+  }
+
+  /** Deletes a scratch draft (never submitted) with its attachments: its author only. */
+  @ApiContract({
+    summary: 'Delete a draft that was never submitted (its author only)',
+    returns: null,
+  })
+  @Delete('calculations/:id')
+  @HttpCode(204)
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  async removeDraft(
+    @CurrentAbility() ability: AppAbility,
+    @CurrentUser() user: User,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<void> {
+    const files = await this.calculations.remove(ability, user, id);
+    await this.attachments.removeFiles(files);
   }
 }

@@ -337,6 +337,39 @@ export class CalculationsService {
     return toCalculationDto(await this.load(draft.id));
   }
 
+  /**
+   * Author: deletes a scratch draft (never submitted) with its comments and attachments; the
+   * audit trail keeps its events and records the deletion. Returns the stored names of the
+   * attachment files, for the caller to remove once the deletion is committed.
+   */
+  async remove(ability: AppAbility, actor: User, id: string): Promise<string[]> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    calc.assertDeletable();
+    ForbiddenError.from(ability).throwUnlessCan(
+      'delete',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    const files = calc.attachments.getItems().map((a) => a.storedName);
+    const detail = {
+      title: calc.title,
+      revision: calc.revision,
+      attachments: calc.attachments
+        .getItems()
+        .map((a) => ({ fileName: a.fileName, sha256: a.sha256 })),
+    };
+    this.em.remove([...calc.comments.getItems(), ...calc.attachments.getItems(), calc]);
+    await this.audit.commit(
+      this.em,
+      { calculationId: calc.id, actor, action: 'deleted', detail },
+      stillIn(calc, ['draft']),
+    );
+    return files;
+  }
+
   /** A comment on a calc that is not yet of record, tied to a storey or result when given. */
   async addComment(
     ability: AppAbility,

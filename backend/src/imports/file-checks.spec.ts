@@ -61,23 +61,6 @@ describe('polyglotProblem: attachments that are two formats at once are refused'
     expect(polyglotProblem('pdf', pdf)).toBe('carries web-page markup (<html…) near its start');
   });
 
-  it.each(['JavaScript', 'JS', 'Launch', 'EmbeddedFiles', 'EmbeddedFile', 'RichMedia', 'XFA'])(
-    'refuses a PDF with /%s',
-    (name) => {
-      const pdf = Buffer.from(
-        `%PDF-1.4\n1 0 obj<</Type/Catalog/OpenAction 2 0 R>>endobj\n2 0 obj<</S/${name} (x)>>endobj\n%%EOF\n`,
-      );
-      expect(polyglotProblem('pdf', pdf)).toBe(
-        `contains active content (/${name}), which is not kept with a calc`,
-      );
-    },
-  );
-
-  it('does not take a longer name such as /JSON for /JS', () => {
-    const pdf = Buffer.from('%PDF-1.4\n1 0 obj<</JSON 1>>endobj\n%%EOF\n');
-    expect(polyglotProblem('pdf', pdf)).toBeNull();
-  });
-
   it('refuses files cut short', () => {
     expect(polyglotProblem('png', PNG.subarray(0, 40))).toBe('is not a complete PNG file');
     expect(polyglotProblem('jpeg', JPEG.subarray(0, JPEG.length - 2))).toBe(

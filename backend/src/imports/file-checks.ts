@@ -30,8 +30,8 @@ export function detectKind(bytes: Buffer): FileKind {
  * scanners and PDF readers may each take it for the other thing. So: no markup a browser would
  * sniff as HTML in the first kilobyte (WHATWG MIME Sniffing, 7.1), nothing after the format's own
  * end (PNG: the IEND chunk, ISO/IEC 15948 5.3 and 11.2.5; JPEG: the EOI marker, ITU T.81 B.2.1;
- * PDF: the last %%EOF, ISO 32000-1 7.5.5), and no active content in a PDF (JavaScript, launch
- * actions, embedded files, rich media, XFA forms; ISO 32000-1 12.6.4 and 7.11.4).
+ * PDF: the last %%EOF, ISO 32000-1 7.5.5). A PDF's objects are then walked for active content
+ * by pdfActiveContent (pdf-active-content.ts).
  */
 export function polyglotProblem(kind: 'pdf' | 'png' | 'jpeg', bytes: Buffer): string | null {
   const head = bytes.subarray(0, 1024).toString('latin1').toLowerCase();
@@ -42,13 +42,6 @@ export function polyglotProblem(kind: 'pdf' | 'png' | 'jpeg', bytes: Buffer): st
   if (end === null) return `is not a complete ${kind.toUpperCase()} file`;
   if (bytes.subarray(end).some((b) => !TRAILING_PADDING.has(b))) {
     return `has other data after the end of the ${kind.toUpperCase()}`;
-  }
-  if (kind === 'pdf') {
-    const text = bytes.toString('latin1');
-    // A PDF name ends at whitespace or a delimiter (ISO 32000-1, 7.2.2 and 7.3.5).
-    const active =
-      /\/(JavaScript|JS|Launch|EmbeddedFiles?|RichMedia|XFA)(?=[\s/<>[\]()%{}]|$)/.exec(text);
-    if (active) return `contains active content (/${active[1]}), which is not kept with a calc`;
   }
   return null;
 }

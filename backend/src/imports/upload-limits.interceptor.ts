@@ -16,6 +16,8 @@ import type { Observable } from 'rxjs';
  */
 export function uploadLimits(maxBytes: number, label: string) {
   const Inner = FileInterceptor('file', {
+    // Browsers send a file's name as UTF-8; multer would read it as Latin-1 and garble it.
+    defParamCharset: 'utf8',
     limits: { fileSize: maxBytes, files: 1, fields: 4, parts: 5, fieldSize: 1024, headerPairs: 50 },
   });
   class UploadLimitsInterceptor implements NestInterceptor {

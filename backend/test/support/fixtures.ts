@@ -55,6 +55,13 @@ export const EN_BASIS = {
   driftLimitClass: 'ductile',
 };
 
+/** The smallest PDF an attachment may be: a catalog and one blank page (ISO 32000-1 7.7). */
+export const ONE_PAGE_PDF = Buffer.from(
+  '%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[3 0 R]/Count 1>>endobj\n' +
+    '3 0 obj<</Type/Page/Parent 2 0 R/MediaBox[0 0 595 842]>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+  'latin1',
+);
+
 /** A supertest parser that keeps a binary body (an XLSX or a PDF) as one Buffer. */
 export const binaryBody: Parameters<request.Test['parse']>[0] = (res, done) => {
   const chunks: Buffer[] = [];
