@@ -66,7 +66,8 @@ export async function pdfActiveContent(bytes: Uint8Array): Promise<string | null
   return null;
 }
 
-function activeName(object: PDFObject, depth: number): string | 'too deep' | null {
+/** The first active name in the object (or 'too deep'), or null. */
+function activeName(object: PDFObject, depth: number): string | null {
   if (depth > MAX_DEPTH) return 'too deep';
   if (object instanceof PDFName) {
     const name = object.decodeText();
