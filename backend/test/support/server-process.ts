@@ -1,5 +1,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { createServer } from 'node:net';
 import { dirname, join } from 'node:path';
 
@@ -13,6 +14,7 @@ const MAIN = join(REPO, 'backend', 'dist', 'main.js');
 export interface ServerProcess {
   url: string;
   port: number;
+  databasePath: string;
   child: ChildProcess;
   /** Everything the server printed so far. */
   output: () => string;
@@ -88,11 +90,47 @@ export async function startServer(options: {
   return {
     url,
     port,
+    databasePath: options.databasePath,
     child,
     output: () => log,
     stop: () => end('SIGTERM'),
     kill: () => end('SIGKILL'),
   };
+}
+
+/**
+ * The newest mail the server's local catcher received for `to`, as its recipient got it (the
+ * outbox page masks set-password links), read from the database file; waits up to 5 s.
+ */
+export async function receivedMail(
+  databasePath: string,
+  to: string,
+): Promise<{ subject: string; text: string }> {
+  // Loaded through require: this file runs as CommonJS under Jest and as ESM under Vitest.
+  const { Database } = createRequire(join(REPO, 'backend', 'package.json'))(
+    'sqlite3',
+  ) as typeof import('sqlite3');
+  for (let attempt = 0; attempt < 50; attempt += 1) {
+    const row = await new Promise<{ subject: string; text: string } | undefined>(
+      (resolve, reject) => {
+        const db = new Database(databasePath, 1 /* OPEN_READONLY */, (openError) => {
+          if (openError) return reject(openError);
+          db.get(
+            `select subject, text from mail_messages where "to" = ? and status = 'received' order by created_at desc limit 1`,
+            [to],
+            (error, found: { subject: string; text: string } | undefined) => {
+              db.close();
+              if (error) reject(error);
+              else resolve(found);
+            },
+          );
+        });
+      },
+    );
+    if (row) return row;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`No mail to ${to} reached the catcher`);
 }
 
 /**

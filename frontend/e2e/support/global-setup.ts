@@ -7,6 +7,7 @@ import { REPO, startServer } from '../../../backend/test/support/server-process'
 declare module 'vitest' {
   export interface ProvidedContext {
     baseURL: string;
+    databasePath: string;
   }
 }
 
@@ -18,5 +19,6 @@ export default async function setup(project: TestProject) {
   const dataDir = mkdtempSync(join(tmpdir(), 'tiermode-journeys-'));
   const server = await startServer({ databasePath: join(dataDir, 'journeys.sqlite') });
   project.provide('baseURL', server.url);
+  project.provide('databasePath', server.databasePath);
   return () => server.stop();
 }

@@ -22,6 +22,7 @@ import {
 } from '@/features/calculations/api/calculations';
 import { AttachmentsPanel } from '@/features/calculations/components/attachments-panel';
 import { CommentThread } from '@/features/calculations/components/comment-thread';
+import { DeleteDraftButton } from '@/features/calculations/components/delete-draft-button';
 import { DownloadsMenu } from '@/features/calculations/components/downloads-menu';
 import { HistoryPanel } from '@/features/calculations/components/history-panel';
 import { PreliminaryWatermark } from '@/features/calculations/components/preliminary-watermark';
@@ -63,6 +64,8 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
   };
   const editable = calc.status === 'draft' && canOn(ability, 'update', 'Calculation', record);
   const ofRecord = calc.status === 'locked' || calc.status === 'superseded';
+  // A draft that never went to review may be thrown away by its author.
+  const deletable = calc.submittedAt === null && canOn(ability, 'delete', 'Calculation', record);
   // The units are saved with the calc by whoever may edit it; anyone else switches them for
   // their own view only.
   const dirty = editable && (!sameJson(inputs.request, calc.inputs) || units !== calc.displayUnits);
@@ -151,6 +154,12 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
                   : 'Unsaved changes; fix the marked inputs to save them'
                 : 'All changes saved'}
           </Typography>
+          {deletable && (
+            <DeleteDraftButton
+              calc={calc}
+              onDeleted={() => void navigate(`/projects/${calc.projectId}`)}
+            />
+          )}
         </Stack>
       )}
       {busy && <LinearProgress aria-label="Working" />}
@@ -279,7 +288,11 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
         )}
         {tab === 'Review' && (
           <Section title="Attachments">
-            <AttachmentsPanel calc={calc} editable={editable} />
+            <AttachmentsPanel
+              calc={calc}
+              editable={editable}
+              removable={editable && calc.author.id === user.id}
+            />
           </Section>
         )}
         {tab === 'History' && (

@@ -99,6 +99,30 @@ export function useAttach(id: string, onProgress: (fraction: number) => void) {
   });
 }
 
+/** The calc's author takes a file back from a draft. */
+export function useRemoveAttachment() {
+  const refresh = useRefresh();
+  return useMutation({
+    mutationFn: async (attachmentId: string) =>
+      (await api.delete<CalculationDto>(`/attachments/${attachmentId}`)).data,
+    onSuccess: (calc) => refresh(calc),
+  });
+}
+
+/** The author throws away a draft that never went to review. */
+export function useDeleteDraft(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async () => {
+      await api.delete(`/calculations/${id}`);
+    },
+    onSuccess: () => {
+      client.removeQueries({ queryKey: calculationKeys.one(id) });
+      return client.invalidateQueries({ queryKey: calculationKeys.all });
+    },
+  });
+}
+
 export function useSaveCalculation(id: string) {
   const refresh = useRefresh();
   return useMutation({

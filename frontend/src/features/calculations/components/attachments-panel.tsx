@@ -1,12 +1,12 @@
 import AttachFileIcon from '@mui/icons-material/AttachFile';
-import { Alert, Box, Link, Stack, Typography } from '@mui/material';
+import { Alert, Box, Button, Link, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
 import { useState } from 'react';
 import { FileDrop } from '@/components/feedback/file-drop';
 import { errorMessages } from '@/lib/api-client';
 import { downloadFile } from '@/lib/download';
-import { useAttach } from '../api/calculations';
+import { useAttach, useRemoveAttachment } from '../api/calculations';
 
 const KIB = 1024;
 const size = (bytes: number) =>
@@ -16,7 +16,7 @@ const size = (bytes: number) =>
       ? `${(bytes / KIB).toFixed(1)} KiB`
       : `${(bytes / KIB / KIB).toFixed(2)} MiB`;
 
-const columns: GridColDef<AttachmentDto>[] = [
+const baseColumns: GridColDef<AttachmentDto>[] = [
   {
     field: 'fileName',
     headerName: 'File',
@@ -54,10 +54,44 @@ const columns: GridColDef<AttachmentDto>[] = [
   },
 ];
 
-/** Drawings and letters kept with the calc; their SHA-256 is sealed with it when it is locked. */
-export function AttachmentsPanel({ calc, editable }: { calc: CalculationDto; editable: boolean }) {
+/**
+ * Drawings and letters kept with the calc; their SHA-256 is sealed with it when it is locked.
+ * While it is a draft, its author may take a file back (`removable`).
+ */
+export function AttachmentsPanel({
+  calc,
+  editable,
+  removable,
+}: {
+  calc: CalculationDto;
+  editable: boolean;
+  removable: boolean;
+}) {
   const [progress, setProgress] = useState(0);
   const attach = useAttach(calc.id, setProgress);
+  const remove = useRemoveAttachment();
+  const columns: GridColDef<AttachmentDto>[] = removable
+    ? [
+        ...baseColumns,
+        {
+          field: 'remove',
+          headerName: '',
+          width: 110,
+          sortable: false,
+          renderCell: ({ row }) => (
+            <Button
+              size="small"
+              color="error"
+              disabled={remove.isPending}
+              aria-label={`Remove ${row.fileName}`}
+              onClick={() => remove.mutate(row.id)}
+            >
+              Remove
+            </Button>
+          ),
+        },
+      ]
+    : baseColumns;
   return (
     <Stack spacing={1}>
       {calc.attachments.length > 0 ? (
@@ -94,9 +128,9 @@ export function AttachmentsPanel({ calc, editable }: { calc: CalculationDto; edi
         Drop a drawing or a letter here (PDF, PNG or JPEG, at most 10 MB), or click to choose one.
         Its SHA-256 is sealed with the calc when it is locked.
       </FileDrop>
-      {attach.isError && (
+      {(attach.isError || remove.isError) && (
         <Alert severity="error" role="alert">
-          {errorMessages(attach.error).join(' ')}
+          {errorMessages(attach.error ?? remove.error).join(' ')}
         </Alert>
       )}
     </Stack>

@@ -1,4 +1,5 @@
 import EditIcon from '@mui/icons-material/Edit';
+import EmailOutlinedIcon from '@mui/icons-material/EmailOutlined';
 import PersonAddIcon from '@mui/icons-material/PersonAdd';
 import { Alert, Box, Button, Stack, Typography } from '@mui/material';
 import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid';
@@ -8,6 +9,7 @@ import { Can } from '@casl/react';
 import type { AppAbility } from '@/lib/ability';
 import { errorMessages } from '@/lib/api-client';
 import { useUsers } from '../api/get-users';
+import { useSendSetPasswordLink } from '../api/send-set-password-link';
 import { UserFormDialog } from './user-form-dialog';
 
 type DialogState = { mode: 'closed' } | { mode: 'add' } | { mode: 'edit'; user: UserDto };
@@ -15,6 +17,7 @@ type DialogState = { mode: 'closed' } | { mode: 'add' } | { mode: 'edit'; user: 
 export function UsersPage() {
   const users = useUsers();
   const [dialog, setDialog] = useState<DialogState>({ mode: 'closed' });
+  const sendLink = useSendSetPasswordLink();
 
   const columns: GridColDef<UserDto>[] = [
     { field: 'name', headerName: 'Name', flex: 1, minWidth: 140 },
@@ -43,14 +46,21 @@ export function UsersPage() {
     {
       field: 'actions',
       type: 'actions',
-      headerName: 'Edit',
-      width: 70,
+      headerName: 'Actions',
+      width: 100,
       getActions: ({ row }) => [
         <GridActionsCellItem
           key="edit"
           icon={<EditIcon />}
           label={`Edit ${row.name}`}
           onClick={() => setDialog({ mode: 'edit', user: row })}
+        />,
+        <GridActionsCellItem
+          key="link"
+          icon={<EmailOutlinedIcon />}
+          label={`Mail ${row.name} a new set-password link`}
+          disabled={!row.active || sendLink.isPending}
+          onClick={() => sendLink.mutate(row)}
         />,
       ],
     },
@@ -75,6 +85,17 @@ export function UsersPage() {
         may lock calcs only while its licence is current.
       </Typography>
       {users.isError && <Alert severity="error">{errorMessages(users.error).join(' ')}</Alert>}
+      {sendLink.isSuccess && (
+        <Alert severity="success" role="status" onClose={() => sendLink.reset()}>
+          A new set-password link was mailed to {sendLink.data.name} ({sendLink.data.email}); any
+          link sent before no longer works.
+        </Alert>
+      )}
+      {sendLink.isError && (
+        <Alert severity="error" role="alert">
+          {errorMessages(sendLink.error).join(' ')}
+        </Alert>
+      )}
       <Box sx={{ height: 520, bgcolor: 'background.paper' }}>
         <DataGrid
           aria-label="People"
