@@ -115,5 +115,40 @@ describe('The account mail (new person)', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'Welcome, Lena Moss' }).waitFor();
     await close();
+
+    // Lena forgets it: the admin mails her a new link, and the first one stays dead.
+    const admin = await newPage(browser);
+    await signIn(admin.page, 'admin');
+    await admin.page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+    await admin.page.goto('/users');
+    await admin.page
+      .getByRole('grid', { name: 'People' })
+      .getByRole('button', { name: 'Mail Lena Moss a new set-password link' })
+      .click();
+    const sent = admin.page.getByRole('status').filter({ hasText: 'A new set-password link' });
+    await sent.waitFor();
+    expect(await sent.textContent()).toContain('lena.moss@tiermode.test');
+    await screenshot(admin.page, 'people-link-sent');
+    // The outbox shows the mail, its link masked.
+    await admin.page.goto('/outbox');
+    await admin.page.getByText('Choose a new Tiermode password').first().click();
+    await admin.page
+      .getByText(/set-password\?token=\(hidden\)/)
+      .first()
+      .waitFor();
+    await screenshot(admin.page, 'outbox-masked-link');
+    await admin.close();
+    const resent = await receivedMail(inject('databasePath'), 'lena.moss@tiermode.test');
+    expect(resent.subject).toBe('Choose a new Tiermode password');
+    const third = await newPage(browser);
+    await third.page.goto(link as string);
+    await third.page.getByLabel('New password').fill('granite-corbel-4040');
+    await third.page.getByLabel('The same again').fill('granite-corbel-4040');
+    await third.page.getByRole('button', { name: 'Save my password' }).click();
+    await third.page
+      .getByRole('alert')
+      .filter({ hasText: 'not valid, was used already' })
+      .waitFor();
+    await third.close();
   });
 });

@@ -105,10 +105,25 @@ describe('The review workflow, across the four roles', () => {
             '3 0 obj<</Type/Page/Parent 2 0 R/MediaBox[0 0 595 842]>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
         ),
       });
-      await page
-        .getByRole('grid', { name: 'Attachments' })
-        .getByRole('button', { name: 'geotechnical-letter.pdf' })
+      const attachments = page.getByRole('grid', { name: 'Attachments' });
+      await attachments
+        .getByRole('button', { name: 'geotechnical-letter.pdf', exact: true })
         .waitFor();
+      // A file added by mistake is taken back before submitting (the author may, on a draft).
+      await page.getByLabel('Attachment file').setInputFiles({
+        name: 'wrong-sketch.pdf',
+        mimeType: 'application/pdf',
+        buffer: Buffer.from(
+          '%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[3 0 R]/Count 1>>endobj\n' +
+            '3 0 obj<</Type/Page/Parent 2 0 R/MediaBox[0 0 420 297]>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+        ),
+      });
+      await attachments.getByRole('button', { name: 'wrong-sketch.pdf', exact: true }).waitFor();
+      await screenshot(page, 'workflow-03b-attachments');
+      await attachments.getByRole('button', { name: 'Remove wrong-sketch.pdf' }).click();
+      await attachments
+        .getByRole('button', { name: 'wrong-sketch.pdf', exact: true })
+        .waitFor({ state: 'detached' });
       await page.getByRole('button', { name: 'Submit for review' }).click();
       await page.getByText('Submitted for review', { exact: true }).first().waitFor();
       await screenshot(page, 'workflow-04-submitted');
