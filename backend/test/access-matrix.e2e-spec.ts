@@ -48,6 +48,16 @@ async function draft(): Promise<string> {
   return (res.body as { id: string }).id;
 }
 
+/** A PDF kept with a fresh draft by the demo designer; its id. */
+async function attachment(): Promise<string> {
+  const res = await http()
+    .post(`/api/calculations/${await draft()}/attachments`)
+    .set(as('designer'))
+    .attach('file', ONE_PAGE_PDF, 'letter.pdf')
+    .expect(201);
+  return (res.body as { attachments: { id: string }[] }).attachments[0].id;
+}
+
 async function submitted(): Promise<string> {
   const id = await draft();
   await http().post(`/api/calculations/${id}/analyse`).set(as('designer')).expect(200);
@@ -488,29 +498,19 @@ const MATRIX: Cell[] = [
     route: 'GET /api/attachments/:id',
     allowed: staff,
     ok: 200,
-    call: async (c) => {
-      const res = await http()
-        .post(`/api/calculations/${await draft()}/attachments`)
-        .set(as('designer'))
-        .attach('file', ONE_PAGE_PDF, 'letter.pdf')
-        .expect(201);
-      const id = (res.body as { attachments: { id: string }[] }).attachments[0].id;
-      return http().get(`/api/attachments/${id}`).set(as(c));
-    },
+    call: async (c) =>
+      http()
+        .get(`/api/attachments/${await attachment()}`)
+        .set(as(c)),
   },
   {
     route: 'DELETE /api/attachments/:id',
     allowed: ['designer'],
     ok: 200,
-    call: async (c) => {
-      const res = await http()
-        .post(`/api/calculations/${await draft()}/attachments`)
-        .set(as('designer'))
-        .attach('file', ONE_PAGE_PDF, 'letter.pdf')
-        .expect(201);
-      const id = (res.body as { attachments: { id: string }[] }).attachments[0].id;
-      return http().delete(`/api/attachments/${id}`).set(as(c));
-    },
+    call: async (c) =>
+      http()
+        .delete(`/api/attachments/${await attachment()}`)
+        .set(as(c)),
   },
   {
     route: 'DELETE /api/calculations/:id',

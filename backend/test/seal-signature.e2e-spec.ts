@@ -6,7 +6,6 @@ import { join } from 'node:path';
 import { MikroORM } from '@mikro-orm/sqlite';
 import type {
   AuditVerifyResponse,
-  CalculationDto,
   SealCheckResponse,
   SealPublicKeyResponse,
 } from '@tiermode/shared-types';
@@ -14,7 +13,7 @@ import { Calculation } from '../src/calculations/calculation.entity';
 import { sealedContentOf } from '../src/calculations/lock';
 import { sealHash } from '../src/calculations/seal';
 import { auditHash, type AuditContent } from '../src/audit/audit-hash';
-import { sampleInputs, useSignedInApp } from './support/fixtures';
+import { calcInState, useSignedInApp } from './support/fixtures';
 
 /**
  * What a database edit can and cannot fake. Someone who can write to the database can change a
@@ -25,27 +24,7 @@ const { state, http, as } = useSignedInApp();
 const sql = (text: string, params: unknown[] = []) =>
   state.app.get(MikroORM).em.getConnection().execute(text, params);
 
-async function lockedCalc(title: string): Promise<CalculationDto> {
-  const project = await http()
-    .post('/api/projects')
-    .set(as('designer'))
-    .send({ name: title })
-    .expect(201);
-  const calc = await http()
-    .post(`/api/projects/${project.body.id}/calculations`)
-    .set(as('designer'))
-    .send({ title, inputs: sampleInputs() })
-    .expect(201);
-  await http().post(`/api/calculations/${calc.body.id}/analyse`).set(as('designer')).expect(200);
-  await http().post(`/api/calculations/${calc.body.id}/submit`).set(as('designer')).expect(200);
-  return (
-    await http()
-      .post(`/api/calculations/${calc.body.id}/lock`)
-      .set(as('reviewer'))
-      .send({ statement: 'Checked independently.' })
-      .expect(200)
-  ).body as CalculationDto;
-}
+const lockedCalc = (title: string) => calcInState({ http, as }, 'locked', title);
 
 const sealOf = async (id: string) =>
   (await http().get(`/api/calculations/${id}/seal`).set(as('designer')).expect(200))

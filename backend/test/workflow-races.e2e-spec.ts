@@ -1,5 +1,5 @@
 import type { AuditEventDto, CalculationDto } from '@tiermode/shared-types';
-import { sampleInputs, useSignedInApp, ONE_PAGE_PDF } from './support/fixtures';
+import { sampleInputs, useSignedInApp, ONE_PAGE_PDF, calcInState } from './support/fixtures';
 
 /**
  * State changes that arrive at the same moment: exactly one wins, the others get 409, and
@@ -9,33 +9,9 @@ import { sampleInputs, useSignedInApp, ONE_PAGE_PDF } from './support/fixtures';
 const { http, as } = useSignedInApp();
 const PARALLEL = 50;
 
-async function submittedCalc(title: string): Promise<CalculationDto> {
-  const project = await http()
-    .post('/api/projects')
-    .set(as('designer'))
-    .send({ name: title })
-    .expect(201);
-  const calc = await http()
-    .post(`/api/projects/${project.body.id}/calculations`)
-    .set(as('designer'))
-    .send({ title, inputs: sampleInputs() })
-    .expect(201);
-  await http().post(`/api/calculations/${calc.body.id}/analyse`).set(as('designer')).expect(200);
-  return (
-    await http().post(`/api/calculations/${calc.body.id}/submit`).set(as('designer')).expect(200)
-  ).body as CalculationDto;
-}
-
-async function lockedCalc(title: string): Promise<CalculationDto> {
-  const calc = await submittedCalc(title);
-  return (
-    await http()
-      .post(`/api/calculations/${calc.id}/lock`)
-      .set(as('reviewer'))
-      .send({ statement: 'Checked independently.' })
-      .expect(200)
-  ).body as CalculationDto;
-}
+const signedIn = { http, as };
+const submittedCalc = (title: string) => calcInState(signedIn, 'submitted', title);
+const lockedCalc = (title: string) => calcInState(signedIn, 'locked', title);
 
 const history = async (id: string) =>
   (await http().get(`/api/calculations/${id}/history`).set(as('designer')).expect(200))

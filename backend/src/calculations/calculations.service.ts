@@ -72,7 +72,7 @@ export function stillIn(calc: Calculation, allowed: CalculationStatus[]) {
     const result = await em
       .getConnection()
       .execute<{ affectedRows: number }>(
-        `update \`calculations\` set \`status\` = \`status\` where \`id\` = ? and \`status\` in (${placeholders})`,
+        `update calculations set status = status where id = ? and status in (${placeholders})`,
         [calc.id, ...allowed],
         'run',
         em.getTransactionContext(),

@@ -1,5 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
-import type { CalculationInputs, MailMessageDto } from '@tiermode/shared-types';
+import type { CalculationDto, CalculationInputs, MailMessageDto } from '@tiermode/shared-types';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { MikroORM } from '@mikro-orm/sqlite';
@@ -114,4 +114,36 @@ export function useSignedInApp() {
     http: () => request(state.app.getHttpServer()),
     as: (role: DemoRole) => ({ Authorization: `Bearer ${state.tokens[role]}` }),
   };
+}
+
+/**
+ * A calc of the invented three-storey building in a project of its own, brought by the demo
+ * designer (and, for `locked`, the demo reviewer) to `status` through the API.
+ */
+export async function calcInState(
+  signedIn: Pick<ReturnType<typeof useSignedInApp>, 'http' | 'as'>,
+  status: 'draft' | 'submitted' | 'locked',
+  title: string,
+): Promise<CalculationDto> {
+  const { http, as } = signedIn;
+  const project = await http().post('/api/projects').set(as('designer')).send({ name: title });
+  let calc = (
+    await http()
+      .post(`/api/projects/${(project.body as { id: string }).id}/calculations`)
+      .set(as('designer'))
+      .send({ title, inputs: sampleInputs() })
+      .expect(201)
+  ).body as CalculationDto;
+  if (status === 'draft') return calc;
+  await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+  calc = (await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200))
+    .body as CalculationDto;
+  if (status === 'submitted') return calc;
+  return (
+    await http()
+      .post(`/api/calculations/${calc.id}/lock`)
+      .set(as('reviewer'))
+      .send({ statement: 'Checked independently.' })
+      .expect(200)
+  ).body as CalculationDto;
 }
