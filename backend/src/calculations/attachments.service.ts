@@ -19,6 +19,7 @@ import { detectKind, polyglotProblem } from '../imports/file-checks';
 import { pdfActiveContent } from '../imports/pdf-active-content';
 import type { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
+import type { Calculation } from './calculation.entity';
 import { calculationSubject, toAttachmentDto } from './calculation.mapper';
 import { CalculationsService, stillIn } from './calculations.service';
 
@@ -80,17 +81,7 @@ export class AttachmentsService {
     // an unreferenced file, never a row without its file.
     await writeFile(join(dir, attachment.storedName), file.buffer, { flag: 'wx' });
     calc.attachments.add(attachment);
-    await this.audit.commit(
-      this.em,
-      {
-        calculationId: calc.id,
-        actor,
-        action: 'attached',
-        detail: { fileName: attachment.fileName, sha256: attachment.sha256 },
-      },
-      // Attachments are sealed with the calc: one may only land on a draft.
-      stillIn(calc, ['draft']),
-    );
+    await this.commitChange(calc, actor, 'attached', attachment);
     return this.calculations.get(ability, calc.id);
   }
 
@@ -104,18 +95,31 @@ export class AttachmentsService {
     }
     const attachment = calc.attachments.getItems().find((a) => a.id === id)!;
     this.em.remove(attachment);
-    await this.audit.commit(
+    await this.commitChange(calc, actor, 'attachment removed', attachment);
+    await this.removeFiles([attachment.storedName]);
+    return this.calculations.get(ability, calc.id);
+  }
+
+  /**
+   * Writes an attachment's change with its audit event. Attachments are sealed with the calc,
+   * so the calc must still be a draft when the change is written (else 409, nothing written).
+   */
+  private commitChange(
+    calc: Calculation,
+    actor: User,
+    action: 'attached' | 'attachment removed',
+    attachment: Attachment,
+  ): Promise<void> {
+    return this.audit.commit(
       this.em,
       {
         calculationId: calc.id,
         actor,
-        action: 'attachment removed',
+        action,
         detail: { fileName: attachment.fileName, sha256: attachment.sha256 },
       },
       stillIn(calc, ['draft']),
     );
-    await this.removeFiles([attachment.storedName]);
-    return this.calculations.get(ability, calc.id);
   }
 
   /** Removes stored files once their rows are gone; a file left behind is only unreferenced. */

@@ -17,6 +17,7 @@ import type {
   AnalysisResponse,
   CalculationDto,
   CalculationInputs,
+  Action,
   CalculationStatus,
   SealCheckResponse,
 } from '@tiermode/shared-types';
@@ -247,7 +248,7 @@ export class CalculationsService {
     id: string,
     comment: string,
   ): Promise<CalculationDto> {
-    const calc = await this.loadToReview(ability, id, 'return');
+    const calc = await this.loadFor(ability, id, 'return');
     calc.returnToDesigner(reviewer, new Date());
     this.em.create(ReviewComment, { calculation: calc, author: reviewer, body: comment });
     this.mail.queue(this.em, {
@@ -277,7 +278,7 @@ export class CalculationsService {
     id: string,
     statement: string,
   ): Promise<CalculationDto> {
-    const calc = await this.loadToReview(ability, id, 'lock');
+    const calc = await this.loadFor(ability, id, 'lock');
     if (!isLicensed(reviewer)) {
       throw new ForbiddenException('Only a reviewer with a current licence may lock a calculation');
     }
@@ -301,16 +302,7 @@ export class CalculationsService {
 
   /** Designer: start the next revision of a locked calc as a new draft with its inputs. */
   async revise(ability: AppAbility, author: User, id: string): Promise<CalculationDto> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
-    calc.assertRevisable();
-    ForbiddenError.from(ability).throwUnlessCan(
-      'revise',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadFor(ability, id, 'revise', (c) => c.assertRevisable());
     const existing = `Revision ${calc.revision + 1} of this calculation already exists`;
     if (await this.em.findOne(Calculation, { previousRevision: calc })) {
       throw new ConflictException(existing);
@@ -343,16 +335,7 @@ export class CalculationsService {
    * attachment files, for the caller to remove once the deletion is committed.
    */
   async remove(ability: AppAbility, actor: User, id: string): Promise<string[]> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
-    calc.assertDeletable();
-    ForbiddenError.from(ability).throwUnlessCan(
-      'delete',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadFor(ability, id, 'delete', (c) => c.assertDeletable());
     const files = calc.attachments.getItems().map((a) => a.storedName);
     const detail = {
       title: calc.title,
@@ -378,16 +361,7 @@ export class CalculationsService {
     body: string,
     target: string | null,
   ): Promise<CalculationDto> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
-    calc.assertNotOfRecord();
-    ForbiddenError.from(ability).throwUnlessCan(
-      'comment',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadFor(ability, id, 'comment', (c) => c.assertNotOfRecord());
     const comment = this.em.create(ReviewComment, { calculation: calc, author, body, target });
     await this.audit.commit(
       this.em,
@@ -502,24 +476,6 @@ export class CalculationsService {
       : ['It is marked superseded, but no later revision of it is locked'];
   }
 
-  /** A calc a reviewer is about to return or lock (its status is checked by the entity). */
-  private async loadToReview(
-    ability: AppAbility,
-    id: string,
-    action: 'return' | 'lock',
-  ): Promise<Calculation> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
-    ForbiddenError.from(ability).throwUnlessCan(
-      action,
-      subject('Calculation', calculationSubject(calc)),
-    );
-    return calc;
-  }
-
   /**
    * Independence: a reviewer may not lock a calc whose any revision they wrote, edited,
    * analysed or submitted, as the audit trail records it (authorship alone once let a designer
@@ -560,21 +516,30 @@ export class CalculationsService {
    * A calculation about to be changed: one that is locked or superseded accepts no change (409),
    * one under review accepts none until it is returned (409); otherwise the ability decides.
    */
-  async loadForWrite(
+  loadForWrite(
     ability: AppAbility,
     id: string,
     action: 'update' | 'analyse' | 'submit',
   ): Promise<Calculation> {
+    return this.loadFor(ability, id, action, (calc) => calc.assertWritable());
+  }
+
+  /**
+   * A calc the caller may read, whose status allows what is about to happen (`assertState`,
+   * a 409) and which the caller may then do `action` to (a 403): in that order, so that a
+   * change the status forbids says so whoever asks.
+   */
+  private async loadFor(
+    ability: AppAbility,
+    id: string,
+    action: Action,
+    assertState: (calc: Calculation) => void = () => undefined,
+  ): Promise<Calculation> {
     const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
-    calc.assertWritable();
-    ForbiddenError.from(ability).throwUnlessCan(
-      action,
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const record = subject('Calculation', calculationSubject(calc));
+    ForbiddenError.from(ability).throwUnlessCan('read', record);
+    assertState(calc);
+    ForbiddenError.from(ability).throwUnlessCan(action, record);
     return calc;
   }
 }
