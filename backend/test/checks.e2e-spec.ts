@@ -103,6 +103,45 @@ describe('POST /api/checks', () => {
     const combination = await checks(ASCE, { combination: 'abs' }).expect(400);
     expect(combination.body.message).toContain('combination must be "cqc" or "srss"');
   });
+
+  const USER = {
+    code: 'USER',
+    scaleFactor: 1,
+    driftLimitRatio: 0.02,
+    deflectionAmplification: 4,
+    stabilityLimit: 0.1,
+  };
+  const NO_BASE_SHEAR =
+    'spectrum gives no base shear: Sa is zero at the periods of every mode, so the code-basis checks cannot be made; check the spectrum table';
+
+  it.each([
+    [
+      'zero everywhere',
+      [
+        { period: 0, sa: 0 },
+        { period: 4, sa: 0 },
+      ],
+    ],
+    // Non-zero only at periods shorter than any of the building's modes (T1 of the sample
+    // building is about 0.5 s; its highest mode is well above 0.01 s).
+    [
+      'zero at every mode period',
+      [
+        { period: 0, sa: 0.4 },
+        { period: 0.005, sa: 0.4 },
+        { period: 0.01, sa: 0 },
+        { period: 4, sa: 0 },
+      ],
+    ],
+  ])(
+    'answers a spectrum %s with a 400 saying so, in every basis (it once gave nulls)',
+    async (_, points) => {
+      for (const basis of [ASCE, EN, USER]) {
+        const res = await checks(basis, { spectrum: { points } }).expect(400);
+        expect(res.body.message).toEqual([NO_BASE_SHEAR]);
+      }
+    },
+  );
 });
 
 describe('Checks stored with a saved calc', () => {

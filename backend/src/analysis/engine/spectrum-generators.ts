@@ -64,8 +64,7 @@ export function asce7TwoPeriodSpectrum(input: Asce7TwoPeriodInput): SpectrumPoin
   if (maxPeriod <= ts) throw new RangeError('maxPeriod must be longer than Ts = SD1/SDS');
   const sa = (t: number) =>
     t < t0 ? sds * (0.4 + (0.6 * t) / t0) : t <= ts ? sds : t <= tl ? sd1 / t : (sd1 * tl) / t ** 2;
-  const periods = [0, t0, ts, ...samplePeriods(ts, maxPeriod), tl].filter((t) => t <= maxPeriod);
-  return toPoints(periods, sa);
+  return toPoints([0, t0, ts, tl, maxPeriod], samplePeriods(ts, maxPeriod), maxPeriod, sa);
 }
 
 export type En1998SpectrumType = 1 | 2;
@@ -144,7 +143,7 @@ export function en1998ElasticSpectrum(
         : t <= td
           ? (plateau * tc) / t
           : (plateau * tc * td) / t ** 2;
-  return toPoints(branchPeriods(tb, tc, td, maxPeriod), sa);
+  return toPoints([0, tb, tc, td, maxPeriod], samplePeriods(tb, maxPeriod), maxPeriod, sa);
 }
 
 /**
@@ -162,6 +161,10 @@ export function en1998DesignSpectrum(
   positive('beta', beta);
   const plateau = (2.5 * ag * s) / input.q;
   const floor = beta * ag;
+  // Where the falling branch meets the lower bound beta ag: on the TC..TD branch at
+  // T = plateau TC / floor, else on the branch past TD at T = sqrt(plateau TC TD / floor).
+  const onSecond = (plateau * tc) / floor;
+  const corner = onSecond <= td ? onSecond : Math.sqrt((plateau * tc * td) / floor);
   const sa = (t: number) =>
     t <= tb
       ? ag * s * (2 / 3 + (t / tb) * (2.5 / input.q - 2 / 3))
@@ -170,14 +173,27 @@ export function en1998DesignSpectrum(
         : t <= td
           ? Math.max((plateau * tc) / t, floor)
           : Math.max((plateau * tc * td) / t ** 2, floor);
-  return toPoints(branchPeriods(tb, tc, td, maxPeriod), sa);
+  const breakpoints = [0, tb, tc, td, maxPeriod, ...(corner > tc ? [corner] : [])];
+  return toPoints(breakpoints, samplePeriods(tb, maxPeriod), maxPeriod, sa);
 }
 
-function branchPeriods(tb: number, tc: number, td: number, maxPeriod: number): number[] {
-  return [0, tb, ...samplePeriods(tb, maxPeriod), tc, td].filter((t) => t <= maxPeriod);
-}
-
-function toPoints(periods: number[], sa: (t: number) => number): SpectrumPoint[] {
-  const unique = [...new Set(periods.map((t) => Math.round(t * 1e9) / 1e9))].sort((a, b) => a - b);
-  return unique.map((period) => ({ period, sa: sa(period) }));
+/**
+ * The table: every breakpoint of the formula exactly (so that each branch, straight or 1/T^n,
+ * is exact under the table's log-log interpolation between its points), and the samples between
+ * them, up to the last period. A sample within 1e-9 s of a breakpoint gives way to it.
+ */
+function toPoints(
+  breakpoints: number[],
+  samples: number[],
+  maxPeriod: number,
+  sa: (t: number) => number,
+): SpectrumPoint[] {
+  const kept = breakpoints.filter((t) => t <= maxPeriod);
+  const periods = [
+    ...kept,
+    ...samples.filter((t) => t <= maxPeriod && kept.every((b) => Math.abs(t - b) > 1e-9)),
+  ].sort((a, b) => a - b);
+  return periods
+    .filter((t, i) => i === 0 || t - periods[i - 1] > 1e-9)
+    .map((period) => ({ period, sa: sa(period) }));
 }

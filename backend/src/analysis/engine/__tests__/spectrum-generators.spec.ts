@@ -106,3 +106,122 @@ describe('generator bounds', () => {
     ).toThrow(new RangeError('maxPeriod must be at most 100 s'));
   });
 });
+
+/**
+ * Each generated table, read the way the analysis reads it (log-log, straight from T = 0),
+ * against its clause's formula written out again here, at 4,001 periods from 0 to the table's
+ * end: every breakpoint is in the table, so every branch is exact to rounding.
+ */
+describe('generated tables against their formulas, densely (relative 1e-9)', () => {
+  const dense = (maxPeriod: number) =>
+    Array.from({ length: 4001 }, (_, i) => (maxPeriod * i) / 4000);
+  const agree = (
+    points: ReturnType<typeof asce7TwoPeriodSpectrum>,
+    formula: (t: number) => number,
+    maxPeriod: number,
+  ) => {
+    let worst = 0;
+    for (const t of dense(maxPeriod)) {
+      const expected = formula(t);
+      const error = Math.abs(at(points, t) - expected) / expected;
+      worst = Math.max(worst, error);
+    }
+    expect(worst).toBeLessThan(1e-9);
+  };
+
+  it.each([
+    [1.0, 0.6, 8],
+    [1.5, 0.9, 12],
+    [0.3, 0.45, 4],
+    [2.1, 0.35, 16],
+  ])('ASCE 7-16 11.4.6 (Eq. 11.4-5 to 11.4-7), SDS %s, SD1 %s, TL %s', (sds, sd1, tl) => {
+    const t0 = (0.2 * sd1) / sds;
+    const ts = sd1 / sds;
+    const formula = (t: number) =>
+      t < t0
+        ? sds * (0.4 + (0.6 * t) / t0)
+        : t <= ts
+          ? sds
+          : t <= tl
+            ? sd1 / t
+            : (sd1 * tl) / (t * t);
+    const maxPeriod = Math.max(10, tl + 2);
+    agree(asce7TwoPeriodSpectrum({ sds, sd1, tl }), formula, maxPeriod);
+    const periods = asce7TwoPeriodSpectrum({ sds, sd1, tl }).map((p) => p.period);
+    for (const breakpoint of [0, t0, ts, tl, maxPeriod]) {
+      expect(periods.some((t) => Math.abs(t - breakpoint) < 1e-12)).toBe(true);
+    }
+  });
+
+  // S, TB, TC, TD: EN 1998-1:2004 Tables 3.2 (Type 1) and 3.3 (Type 2), from memory.
+  const GROUND = {
+    1: { A: [1.0, 0.15, 0.4, 2.0], C: [1.15, 0.2, 0.6, 2.0], E: [1.4, 0.15, 0.5, 2.0] },
+    2: { B: [1.35, 0.05, 0.25, 1.2], D: [1.8, 0.1, 0.3, 1.2] },
+  } as const;
+  const cases = Object.entries(GROUND).flatMap(([type, grounds]) =>
+    Object.entries(grounds).map(
+      ([ground, row]) => [Number(type) as 1 | 2, ground as 'A', row as readonly number[]] as const,
+    ),
+  );
+
+  it.each(cases)('EN 1998-1 3.2.2.2 (Eq. 3.2 to 3.5), Type %s, ground %s', (type, ground, row) => {
+    const [s, tb, tc, td] = row;
+    const ag = 0.3 * 1.2; // agR 0.3 g, gamma_I 1.2
+    const eta = Math.max(0.55, Math.sqrt(10 / (5 + 7))); // 7 % damping, Eq. 3.6
+    const formula = (t: number) =>
+      t <= tb
+        ? ag * s * (1 + (t / tb) * (eta * 2.5 - 1))
+        : t <= tc
+          ? ag * s * eta * 2.5
+          : t <= td
+            ? ag * s * eta * 2.5 * (tc / t)
+            : ag * s * eta * 2.5 * ((tc * td) / (t * t));
+    const points = en1998ElasticSpectrum({
+      agR: 0.3,
+      importanceFactor: 1.2,
+      groundType: ground,
+      spectrumType: type,
+      dampingPercent: 7,
+      maxPeriod: 6,
+    });
+    agree(points, formula, 6);
+  });
+
+  it.each(
+    cases.flatMap(([type, ground, row]) =>
+      [1.5, 3.9, 6].map((q) => [type, ground, row, q] as const),
+    ),
+  )(
+    'EN 1998-1 3.2.2.5 (Eq. 3.13 to 3.16), Type %s, ground %s, q = %s, with the beta ag corner',
+    (type, ground, row, q) => {
+      const [s, tb, tc, td] = row;
+      const ag = 0.25;
+      const beta = 0.2;
+      const formula = (t: number) =>
+        t <= tb
+          ? ag * s * (2 / 3 + (t / tb) * (2.5 / q - 2 / 3))
+          : t <= tc
+            ? (ag * s * 2.5) / q
+            : t <= td
+              ? Math.max(((ag * s * 2.5) / q) * (tc / t), beta * ag)
+              : Math.max(((ag * s * 2.5) / q) * ((tc * td) / (t * t)), beta * ag);
+      const points = en1998DesignSpectrum({
+        agR: 0.25,
+        groundType: ground,
+        spectrumType: type,
+        q,
+        maxPeriod: 8,
+      });
+      agree(points, formula, 8);
+      // The corner where the bound takes over is a point of the table.
+      const corner = [tc, ...dense(8)].find((t) => t > tc && formula(t) === beta * ag);
+      if (corner !== undefined) {
+        const exact =
+          (2.5 * s * tc) / (q * beta) <= td
+            ? (2.5 * s * tc) / (q * beta)
+            : Math.sqrt((2.5 * s * tc * td) / (q * beta));
+        expect(points.some((p) => Math.abs(p.period - exact) < 1e-12)).toBe(true);
+      }
+    },
+  );
+});

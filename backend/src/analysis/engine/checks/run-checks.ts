@@ -40,6 +40,13 @@ export function runChecks(request: ChecksRequest): {
 } {
   const analysis = analyse(request);
   const combined = analysis.combined[request.combination ?? 'cqc'];
+  // Every check divides by the modal base shear (the scale factor V / Vt, theta's storey shear,
+  // the drift scaling): with none there is nothing to check, and no number to give.
+  if (!(combined.baseShear > 0)) {
+    throw new RangeError(
+      'spectrum gives no base shear: Sa is zero at the periods of every mode, so the code-basis checks cannot be made; check the spectrum table',
+    );
+  }
   const { storeys } = request;
   const masses = storeys.map((s) => s.mass);
   const irregularities = verticalIrregularities(
