@@ -6,14 +6,10 @@ import { selectModeCount } from './mode-selection';
 import { naturalModes, type Mode } from './modes';
 import { assertStoreys, type Storey } from './shear-building';
 import { assertSpectrum, spectralAcceleration } from './spectrum';
+import { analysisWarnings, type CodeBasisCode } from './analysis-warnings';
 
 /** Bumped whenever a change to the engine could change a number it returns. */
 export const ENGINE_VERSION = '1.0.1';
-
-/** EN 1998-1 4.3.3.3.1 asks the modes used to reach 90% of the mass. */
-export const MIN_CUMULATIVE_MASS_RATIO = 0.9;
-/** EN 1998-1 4.3.3.3.2: modes i and j are independent when T_j <= 0.9 T_i. */
-export const CLOSE_MODE_PERIOD_RATIO = 0.9;
 
 /**
  * Checks everything about the inputs that can be checked before solving: the storeys, the
@@ -47,6 +43,8 @@ export function assertAnalysisRequest(request: AnalysisRequest): void {
 export function analyse(
   request: AnalysisRequest,
   solveModes: (storeys: readonly Storey[]) => Mode[] = naturalModes,
+  /** The calc's code basis, whose clauses the warnings cite. */
+  codeBasis?: CodeBasisCode,
 ): AnalysisResponse {
   assertAnalysisRequest(request);
   const { storeys, spectrum, dampingRatio } = request;
@@ -59,10 +57,8 @@ export function analyse(
       targetMassRatio: request.targetMassRatio,
     }),
   );
-  const warnings: string[] = [];
   const modes: ModeResult[] = used.map((mode) => {
-    const { sa, warning } = spectralAcceleration(spectrum.points, mode.period, interpolation);
-    if (warning) warnings.push(`Mode ${mode.number}: ${warning}.`);
+    const { sa } = spectralAcceleration(spectrum.points, mode.period, interpolation);
     return {
       number: mode.number,
       period: mode.period,
@@ -78,22 +74,11 @@ export function analyse(
     };
   });
 
-  const reached = used[used.length - 1].cumulativeMassRatio;
-  if (reached < MIN_CUMULATIVE_MASS_RATIO) {
-    warnings.push(
-      `The ${used.length} mode(s) used reach ${(reached * 100).toFixed(1)}% of the total mass; ` +
-        'EN 1998-1 4.3.3.3.1 asks for at least 90% (ASCE 7 12.9.1.1 asks for 100%, or a residual mode).',
-    );
-  }
-  for (let i = 1; i < used.length; i += 1) {
-    const ratio = used[i].period / used[i - 1].period;
-    if (ratio > CLOSE_MODE_PERIOD_RATIO) {
-      warnings.push(
-        `Modes ${i} and ${i + 1} are closely spaced (T${i + 1}/T${i} = ${ratio.toFixed(3)} > 0.9, ` +
-          'EN 1998-1 4.3.3.3.2): SRSS is not acceptable for them; use CQC.',
-      );
-    }
-  }
+  const warnings = analysisWarnings(
+    used,
+    { first: spectrum.points[0].period, last: spectrum.points[spectrum.points.length - 1].period },
+    codeBasis,
+  );
 
   const correlation = correlationMatrix(
     used.map((m) => m.circularFrequency),

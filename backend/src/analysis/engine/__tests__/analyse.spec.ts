@@ -114,7 +114,10 @@ describe('analyse', () => {
     });
     const ratio = close.modes[1].period / close.modes[0].period;
     expect(ratio).toBeGreaterThan(0.9);
-    expect(close.warnings.some((w) => w.startsWith('Modes 1 and 2 are closely spaced'))).toBe(true);
+    expect(close.modes[1].effectiveMassRatio).toBeGreaterThan(0.01);
+    expect(close.warnings).toContain(
+      `Modes 1 and 2 (T2/T1 = ${ratio.toFixed(3)}) are closely spaced and each holds at least 1% of the mass (common practice: T_j > 0.9 T_i): SRSS is not acceptable for them; use CQC.`,
+    );
     const outside = analyse({
       storeys: uniformBuilding(3),
       spectrum: {
@@ -125,7 +128,63 @@ describe('analyse', () => {
       },
       dampingRatio: 0.05,
     });
-    expect(outside.warnings.some((w) => w.startsWith('Mode 2: T = '))).toBe(true);
+    expect(outside.warnings.some((w) => /^Modes? [\d ,to]+: T/.test(w))).toBe(true);
+  });
+
+  it('cites the clause of the calc’s own code basis, and none it does not follow', () => {
+    const request = {
+      storeys: [
+        { mass: 1e6, stiffness: 1e9, height: 3 },
+        { mass: 1e4, stiffness: 1e7, height: 3 },
+      ],
+      spectrum: flat(1),
+      dampingRatio: 0.05,
+    };
+    const en = analyse(request, undefined, 'EN1998-1').warnings.join(' ');
+    const asce = analyse(request, undefined, 'ASCE7-22').warnings.join(' ');
+    expect(en).toContain('(EN 1998-1:2004 4.3.3.3.2)');
+    expect(asce).toContain('(ASCE 7-22 12.9.1.3, clause from memory)');
+    expect(asce).not.toContain('EN 1998-1');
+  });
+
+  it('says nothing of closely spaced modes that hold almost no mass', () => {
+    // A 1 kg appendage on top, 5% stiffer in frequency than the building (k = m w^2 1.05^2):
+    // the periods are close, but the appendage's mode holds about a millionth of the mass.
+    const result = analyse({
+      storeys: [
+        { mass: 1e6, stiffness: 1e9, height: 3 },
+        { mass: 1, stiffness: 1000 * 1.05 ** 2, height: 3 },
+      ],
+      spectrum: flat(1),
+      dampingRatio: 0.05,
+    });
+    const ratio = result.modes[1].period / result.modes[0].period;
+    expect(ratio).toBeGreaterThan(0.9);
+    expect(Math.min(...result.modes.map((m) => m.effectiveMassRatio))).toBeLessThan(0.01);
+    expect(result.warnings.filter((w) => /closely spaced/.test(w))).toEqual([]);
+  });
+
+  it('groups the periods outside the table into one line per side', () => {
+    // A tall uniform building: its higher modes all fall below a table that starts at 0.2 s.
+    const result = analyse({
+      storeys: uniformBuilding(40),
+      spectrum: {
+        points: [
+          { period: 0.2, sa: 1 },
+          { period: 10, sa: 0.2 },
+        ],
+      },
+      dampingRatio: 0.05,
+    });
+    const below = result.modes.filter((m) => m.period < 0.2).map((m) => m.number);
+    expect(below.length).toBeGreaterThan(10);
+    const lines = result.warnings.filter((w) => /below the spectrum table/.test(w));
+    expect(lines).toHaveLength(1);
+    expect(lines[0]).toMatch(
+      new RegExp(
+        `^Modes ${below[0]} to ${below[below.length - 1]}: T from [\\d.e-]+ s to [\\d.e-]+ s are below the spectrum table \\(which starts at 0\\.2 s\\); its first value was used\\.$`,
+      ),
+    );
   });
 
   it('refuses damping of 0 or 1 and an unknown interpolation', () => {

@@ -8,6 +8,7 @@ import type {
   UserBasis,
 } from '@tiermode/shared-types';
 import { analyse } from '../analyse';
+import { naturalModes } from '../modes';
 import { STANDARD_GRAVITY } from '../modal-response';
 import { EN1998_GROUND_PARAMETERS } from '../spectrum-generators';
 import { allowableDriftRatio, amplifiedDrift, stabilityCoefficient } from './asce7-drift';
@@ -38,7 +39,7 @@ export function runChecks(request: ChecksRequest): {
   analysis: AnalysisResponse;
   checks: ChecksResponse;
 } {
-  const analysis = analyse(request);
+  const analysis = analyse(request, naturalModes, request.basis.code);
   const combined = analysis.combined[request.combination ?? 'cqc'];
   // Every check divides by the modal base shear (the scale factor V / Vt, theta's storey shear,
   // the drift scaling): with none there is nothing to check, and no number to give.
