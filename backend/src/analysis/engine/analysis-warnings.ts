@@ -60,14 +60,15 @@ export function analysisWarnings(
   const warnings: string[] = [];
   const below = modes.filter((m) => m.period < table.first);
   const above = modes.filter((m) => m.period > table.last);
-  if (below.length > 0) {
-    warnings.push(
-      `${listModes(below)}: ${periods(below)} below the spectrum table (which starts at ${table.first} s); its first value was used.`,
-    );
-  }
+  // Long periods first: the fundamental modes, which hold most of the mass, are there.
   if (above.length > 0) {
     warnings.push(
       `${listModes(above)}: ${periods(above)} above the spectrum table (which ends at ${table.last} s); its last value was used.`,
+    );
+  }
+  if (below.length > 0) {
+    warnings.push(
+      `${listModes(below)}: ${periods(below)} below the spectrum table (which starts at ${table.first} s); its first value was used.`,
     );
   }
   const reached = modes[modes.length - 1].cumulativeMassRatio;
