@@ -97,6 +97,18 @@ describe('The analysis page (designer)', () => {
     await expect.poll(() => firstPeriod(page), { timeout: 10_000 }).not.toBe(pastedPeriod);
     await waitForResults(page);
 
+    // A units slip: storey 2's stiffness typed 1e8 times too small. The results are flagged in
+    // red, naming storey 2, and the flag goes once the value is put right.
+    await editCell(page, 'L2', 'stiffness', '0.0048');
+    const implausible = page.getByRole('alert', { name: 'Implausible results' });
+    await implausible.waitFor();
+    expect(await implausible.textContent()).toMatch(/Storey 2 is the most flexible/);
+    expect(await implausible.textContent()).toMatch(/Storey 2 drifts \d+% of its height/);
+    await screenshot(page, 'analysis-implausible');
+    await editCell(page, 'L2', 'stiffness', '480000');
+    await implausible.waitFor({ state: 'detached' });
+    await waitForResults(page);
+
     // Storey 1's stiffness from four 400 mm square columns fixed at both ends, E = 30 GPa, h = 4 m:
     // I = 0.4^4 / 12 = 213,333 cm^4; k = 4 x 12 x 30e9 x 2.13333e-3 / 4^3 = 48,000 kN/m (by hand).
     await storeyRow(page, 'L1')

@@ -124,7 +124,18 @@ export interface AnalysisResponse {
   /** rho_ij of the modes used. */
   correlation: number[][];
   warnings: string[];
+  /**
+   * Results no building could have (a units slip, usually), each with the storey that causes
+   * it. Absent from analyses stored before these flags existed.
+   */
+  plausibility?: PlausibilityFlag[];
   engineVersion: string;
+}
+
+/** A result past what any real building shows, and the storey to look at (1-based). */
+export interface PlausibilityFlag {
+  storey: number;
+  message: string;
 }
 
 /** One checked value of a reference case. */

@@ -7,6 +7,7 @@ import { naturalModes, type Mode } from './modes';
 import { assertStoreys, type Storey } from './shear-building';
 import { assertSpectrum, spectralAcceleration } from './spectrum';
 import { analysisWarnings, type CodeBasisCode } from './analysis-warnings';
+import { plausibilityFlags } from './plausibility';
 
 /** Bumped whenever a change to the engine could change a number it returns. */
 export const ENGINE_VERSION = '1.0.1';
@@ -98,6 +99,7 @@ export function analyse(
     combined,
     correlation,
     warnings,
+    plausibility: plausibilityFlags(storeys, modes[0], combined.cqc),
     engineVersion: ENGINE_VERSION,
   };
 }

@@ -7,6 +7,7 @@ import { CorrelationTable } from './correlation-table';
 import { MassChart } from './mass-chart';
 import { MethodView } from './method-view';
 import { ModeShapeChart } from './mode-shape-chart';
+import { ImplausibleResultsAlert } from './implausible-results-alert';
 import { ModesTable } from './modes-table';
 import { ResponseProfiles } from './response-profiles';
 
@@ -39,6 +40,7 @@ export function AnalysisResults({
   const levels = elevations(storeys);
   return (
     <>
+      <ImplausibleResultsAlert flags={result.plausibility ?? []} />
       {result.warnings.length > 0 && (
         <Alert severity="warning" aria-label="Warnings">
           {result.warnings.map((w) => (
