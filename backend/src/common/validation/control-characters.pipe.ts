@@ -25,12 +25,13 @@ export function controlCharacterMessages(value: unknown, path = ''): string[] {
     return value.flatMap((item, index) => controlCharacterMessages(item, `${path}[${index}]`));
   }
   if (value !== null && typeof value === 'object') {
-    return Object.entries(value).flatMap(([key, item]) => [
-      ...controlCharacterMessages(key, path ? `${path}.${key}` : key).map(
-        () => `${labelOf(path || 'body')} has a field name with a control character`,
-      ),
-      ...controlCharacterMessages(item, path ? `${path}.${key}` : key),
-    ]);
+    return Object.entries(value).flatMap(([key, item]) => {
+      const at = path ? `${path}.${key}` : key;
+      const badKey = CONTROL.test(key)
+        ? [`${labelOf(path || 'body')} has a field name with a control character`]
+        : [];
+      return [...badKey, ...controlCharacterMessages(item, at)];
+    });
   }
   return [];
 }
