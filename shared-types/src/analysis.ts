@@ -63,7 +63,7 @@ export interface AnalysisRequest {
   targetMassRatio?: number;
 }
 
-/** One mode's maxima. Signed: they carry the sign of the roof-normalised shape. */
+/** One mode's maxima. Signed: they carry the sign of `shape` (roof moving positive, as a rule). */
 export interface ModalResponse {
   /** m, per level */
   displacement: number[];
@@ -87,9 +87,19 @@ export interface ModeResult {
   frequency: number;
   /** rad/s */
   circularFrequency: number;
-  /** Roof-normalised (+1 at the roof). */
+  /**
+   * +1 at the roof; or, where the roof barely moves in this mode (its component is below 1e-6 of
+   * the largest), +1 at the largest component: see `shapeNormalisation`.
+   */
   shape: number[];
-  /** For the roof-normalised shape. */
+  /**
+   * 'roof' or 'largest' (then `normalisationLevel` is the level where the shape is +1). Absent
+   * from analyses stored before it existed, whose shapes are all roof-normalised.
+   */
+  shapeNormalisation?: 'roof' | 'largest';
+  /** 1-based level where `shape` is +1. */
+  normalisationLevel?: number;
+  /** For `shape` as normalised. */
   participationFactor: number;
   /** kg */
   effectiveMass: number;
@@ -250,4 +260,16 @@ export interface StoreyImportResponse {
 export interface SpectrumImportResponse {
   points: SpectrumPointInput[];
   errors: ImportCellError[];
+}
+
+/**
+ * What a shown shape and participation factor are normalised to, where it is not the roof:
+ * "shape +1 at level 3"; empty for the usual roof normalisation.
+ */
+export function shapeNormalisationNote(
+  mode: Pick<ModeResult, 'shapeNormalisation' | 'normalisationLevel'>,
+): string {
+  return mode.shapeNormalisation === 'largest'
+    ? `shape +1 at level ${mode.normalisationLevel}`
+    : '';
 }

@@ -25,7 +25,8 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
       'Period (s)',
       'Frequency (Hz)',
       'Circular frequency (rad/s)',
-      'Participation factor (roof = 1)',
+      'Participation factor',
+      'Shape +1 at level',
       'Effective modal mass (t)',
       'Effective mass ratio (%)',
       'Cumulative mass ratio (%)',
@@ -37,6 +38,8 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
       m.frequency,
       m.circularFrequency,
       m.participationFactor,
+      // The roof unless the roof barely moves in this mode (analyses before engine 1.1: roof).
+      m.normalisationLevel ?? analysis.modes[0].shape.length,
       m.effectiveMass * T,
       m.effectiveMassRatio * 100,
       m.cumulativeMassRatio * 100,

@@ -1,4 +1,9 @@
-import type { CalculationDto, CombinedResponse, SealCheckResponse } from '@tiermode/shared-types';
+import {
+  shapeNormalisationNote,
+  type CalculationDto,
+  type CombinedResponse,
+  type SealCheckResponse,
+} from '@tiermode/shared-types';
 import { formats as f, isoDate } from './formats';
 import { lineChart } from './pdf-chart';
 import { finish, heading, MARGIN, newDocument, write, type Doc } from './pdf-kit';
@@ -180,18 +185,23 @@ function results(doc: Doc, calc: CalculationDto) {
       String(m.number),
       f.period(m.period),
       f.plain(m.frequency),
-      f.plain(m.participationFactor),
+      f.plain(m.participationFactor) + (shapeNormalisationNote(m) ? ' †' : ''),
       f.t(m.effectiveMass),
       f.percent(m.effectiveMassRatio),
       f.percent(m.cumulativeMassRatio),
       f.g(m.sa),
     ]),
   );
+  if (analysis.modes.some((m) => shapeNormalisationNote(m))) {
+    write(doc, '† Shape +1 at its largest component, not the roof (see the warnings).', {
+      width: 495,
+    });
+  }
   for (const w of analysis.warnings) write(doc, `Warning: ${w}`, { width: 495 });
   let height = 0;
   const elevations = calc.inputs.storeys.map((s) => (height += s.height));
   lineChart(doc, {
-    title: 'Mode shapes (roof = 1), first three modes',
+    title: 'Mode shapes (roof = 1 unless noted), first three modes',
     xLabel: 'Mode shape',
     yLabel: 'Elevation (m)',
     width: 495,

@@ -10,7 +10,7 @@ import { analysisWarnings, type CodeBasisCode } from './analysis-warnings';
 import { plausibilityFlags } from './plausibility';
 
 /** Bumped whenever a change to the engine could change a number it returns. */
-export const ENGINE_VERSION = '1.0.1';
+export const ENGINE_VERSION = '1.1.0';
 
 /**
  * Checks everything about the inputs that can be checked before solving: the storeys, the
@@ -66,6 +66,8 @@ export function analyse(
       frequency: mode.frequency,
       circularFrequency: mode.circularFrequency,
       shape: mode.shape,
+      shapeNormalisation: mode.shapeNormalisation,
+      normalisationLevel: mode.normalisationLevel,
       participationFactor: mode.participationFactor,
       effectiveMass: mode.effectiveMass,
       effectiveMassRatio: mode.effectiveMassRatio,
@@ -79,6 +81,7 @@ export function analyse(
     used,
     { first: spectrum.points[0].period, last: spectrum.points[spectrum.points.length - 1].period },
     codeBasis,
+    storeys.map((s) => s.mass),
   );
 
   const correlation = correlationMatrix(

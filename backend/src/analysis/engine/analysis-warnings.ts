@@ -12,11 +12,16 @@ export const CLOSE_MODE_PERIOD_RATIO = 0.9;
  */
 export const SIGNIFICANT_MASS_RATIO = 0.01;
 
+/** A level with less than this share of a neighbouring level's mass is named (see below). */
+export const NEGLIGIBLE_MASS_RATIO = 1e-6;
+
 export interface ModeForWarnings {
   number: number;
   period: number;
   effectiveMassRatio: number;
   cumulativeMassRatio: number;
+  shapeNormalisation?: 'roof' | 'largest';
+  normalisationLevel?: number;
 }
 
 /** Where the spectrum table starts and ends, s. */
@@ -55,9 +60,11 @@ export function analysisWarnings(
   modes: readonly ModeForWarnings[],
   table: TableRange,
   basis?: CodeBasisCode,
+  /** kg per level, level 1 first: to name levels of negligible mass. */
+  masses: readonly number[] = [],
 ): string[] {
   const cite = clauses(basis);
-  const warnings: string[] = [];
+  const warnings: string[] = [...negligibleMassWarnings(masses)];
   const below = modes.filter((m) => m.period < table.first);
   const above = modes.filter((m) => m.period > table.last);
   // Long periods first: the fundamental modes, which hold most of the mass, are there.
@@ -93,7 +100,35 @@ export function analysisWarnings(
       `Modes ${pairs.join(', ')} are closely spaced and each holds at least 1% of the mass (${cite.close}): SRSS is not acceptable for them; use CQC.`,
     );
   }
+  const byLargest = modes.filter((m) => m.shapeNormalisation === 'largest');
+  if (byLargest.length > 0) {
+    const levels = byLargest.map((m) => m.normalisationLevel).join(', ');
+    warnings.push(
+      `${listModes(byLargest)}: the roof barely moves (less than a millionth of the largest component), so ${byLargest.length === 1 ? 'the shape is' : 'each shape is'} +1 at its largest component (level ${levels}) and the participation factor is for that shape.`,
+    );
+  }
   return warnings;
+}
+
+/**
+ * Levels whose mass is negligible beside a neighbour's. The engine keeps them exactly (its
+ * periods hold their relative accuracy however light a level is: shear-building-frequencies.ts),
+ * and the answer then equals that of the building with the level statically condensed out, but
+ * such a mass is more often a units slip than a design, so it is named.
+ */
+function negligibleMassWarnings(masses: readonly number[]): string[] {
+  const light = masses
+    .map((mass, i) => {
+      const neighbour = Math.max(masses[i - 1] ?? 0, masses[i + 1] ?? 0);
+      return { level: i + 1, ratio: mass / neighbour };
+    })
+    .filter(({ ratio }) => ratio < NEGLIGIBLE_MASS_RATIO);
+  if (light.length === 0) return [];
+  const levels = light.map((l) => l.level).join(', ');
+  const ratios = light.map((l) => l.ratio.toPrecision(2)).join(', ');
+  return [
+    `Level${light.length > 1 ? 's' : ''} ${levels} carr${light.length > 1 ? 'y' : 'ies'} a negligible mass (${ratios} of the heavier level beside ${light.length > 1 ? 'each' : 'it'}): the analysis keeps ${light.length > 1 ? 'them' : 'it'} as given, and the results equal those with ${light.length > 1 ? 'those levels' : 'that level'} statically condensed out. Check that the mass is meant (kg).`,
+  ];
 }
 
 /** "Mode 3" or "Modes 3 to 7, 9": runs of consecutive numbers as ranges. */

@@ -1,5 +1,10 @@
 import { assertStoreys, stiffnessTridiagonal, type Storey } from './shear-building';
-import { symmetricTridiagonalEigen } from './symmetric-tridiagonal';
+import { shearBuildingFrequencies } from './shear-building-frequencies';
+import {
+  symmetricTridiagonalEigenvalues,
+  tridiagonalEigenvectors,
+  tridiagonalNorm,
+} from './symmetric-tridiagonal';
 
 const TOO_EXTREME =
   'the storey masses and stiffnesses are too far apart in size to analyse in double precision';
@@ -14,11 +19,17 @@ export interface Mode {
   frequency: number;
   /** T = 2 pi / omega, s */
   period: number;
-  /** Normalised to +1 at the roof (index N-1). */
+  /**
+   * Normalised to +1 at the roof (index N-1), or, where the roof barely moves in this mode
+   * (`shapeNormalisation` 'largest'), to +1 at its largest component.
+   */
   shape: number[];
+  shapeNormalisation: 'roof' | 'largest';
+  /** 1-based level where `shape` is +1. */
+  normalisationLevel: number;
   /** Normalised so that phi^T M phi = 1 (same sign as `shape`). */
   massNormalisedShape: Float64Array;
-  /** Gamma = phi^T M r / phi^T M phi for the roof-normalised shape, r = ones. */
+  /** Gamma = phi^T M r / phi^T M phi for `shape`, r = ones. */
   participationFactor: number;
   /** M* = (phi^T M r)^2 / (phi^T M phi), kg; independent of the normalisation. */
   effectiveMass: number;
@@ -39,8 +50,16 @@ export interface Mode {
  */
 export function naturalModes(storeys: readonly Storey[]): Mode[] {
   const { a, b, rootMass } = standardForm(storeys);
-  const { values, vectors } = symmetricTridiagonalEigen(a, b);
-  return modesFromEigenpairs(storeys, rootMass, values, vectors);
+  // omega^2 to eps * ||A|| first, then each omega to high relative accuracy from the bidiagonal
+  // factor of A (shear-building-frequencies.ts), and the vectors from those values.
+  const norm = tridiagonalNorm(a, b);
+  const omegas = shearBuildingFrequencies(storeys, symmetricTridiagonalEigenvalues(a, b), norm);
+  const values = omegas.map((omega) => omega * omega);
+  // The vectors from K - omega^2 M itself (see tridiagonalEigenvectors): a level of negligible
+  // mass makes A huge but leaves K and M as they are.
+  const { diagonal, offDiagonal } = stiffnessTridiagonal(storeys);
+  const vectors = tridiagonalEigenvectors(diagonal, offDiagonal, values, rootMass);
+  return modesFromEigenpairs(storeys, rootMass, values, vectors, omegas);
 }
 
 /** A = M^-1/2 K M^-1/2 as its diagonal a and off-diagonal b, and the square roots of the masses. */
@@ -59,14 +78,25 @@ export function standardForm(storeys: readonly Storey[]): {
 }
 
 /**
+ * Below this ratio of the roof component to the largest, a shape is not divided by its roof
+ * component: the quotient would reach 1e6 or more (a mode confined to the lower storeys of a
+ * building with a stiff, light base and heavy, soft top can have a roof component of 1e-43 of
+ * its largest), and Gamma would be as large the other way, both meaningless on their own.
+ */
+export const ROOF_NORMALISATION_LIMIT = 1e-6;
+
+/**
  * The modes from the eigenpairs of A (values ascending, unit vectors x): phi = M^-1/2 x is the
- * mass-normalised shape, with its sign chosen to make the roof move positive.
+ * mass-normalised shape, with its sign chosen to make the roof (or the reference level of a
+ * shape normalised to its largest component) move positive.
  */
 export function modesFromEigenpairs(
   storeys: readonly Storey[],
   rootMass: readonly number[],
   values: readonly number[],
   vectors: readonly ArrayLike<number>[],
+  /** omega_j where known more accurately than sqrt(values[j]). */
+  omegas?: readonly number[],
 ): Mode[] {
   const n = storeys.length;
   const totalMass = storeys.reduce((sum, s) => sum + s.mass, 0);
@@ -78,11 +108,23 @@ export function modesFromEigenpairs(
       throw new RangeError(TOO_EXTREME);
     }
     const x = vectors[j];
-    // The roof component of an eigenvector of an unreduced tridiagonal matrix is never zero.
-    const sign = x[n - 1] < 0 ? -1 : 1;
     const massNormalisedShape = new Float64Array(n);
-    for (let i = 0; i < n; i += 1) massNormalisedShape[i] = (sign * x[i]) / rootMass[i];
-    const roof = massNormalisedShape[n - 1];
+    let largest = 0;
+    for (let i = 0; i < n; i += 1) {
+      massNormalisedShape[i] = x[i] / rootMass[i];
+      if (Math.abs(massNormalisedShape[i]) > Math.abs(massNormalisedShape[largest])) largest = i;
+    }
+    // The roof component of an eigenvector of an unreduced tridiagonal matrix is never zero,
+    // but it can be too small to divide by (ROOF_NORMALISATION_LIMIT).
+    const byRoof =
+      Math.abs(massNormalisedShape[n - 1]) >=
+      ROOF_NORMALISATION_LIMIT * Math.abs(massNormalisedShape[largest]);
+    const reference = byRoof ? n - 1 : largest;
+    // The sign that makes the reference component (the roof, as a rule) move positive.
+    if (massNormalisedShape[reference] < 0) {
+      for (let i = 0; i < n; i += 1) massNormalisedShape[i] = -massNormalisedShape[i];
+    }
+    const roof = massNormalisedShape[reference];
     const shape = new Array<number>(n);
     let l = 0; // phi^T M r
     let mn = 0; // phi^T M phi
@@ -95,13 +137,15 @@ export function modesFromEigenpairs(
     const effectiveMass = (l * l) / mn;
     const effectiveMassRatio = effectiveMass / totalMass;
     cumulative += effectiveMassRatio;
-    const circularFrequency = Math.sqrt(omegaSquared);
+    const circularFrequency = omegas?.[j] ?? Math.sqrt(omegaSquared);
     return {
       number: j + 1,
       circularFrequency,
       frequency: circularFrequency / (2 * Math.PI),
       period: (2 * Math.PI) / circularFrequency,
       shape,
+      shapeNormalisation: byRoof ? 'roof' : 'largest',
+      normalisationLevel: reference + 1,
       massNormalisedShape,
       participationFactor: l / mn,
       effectiveMass,

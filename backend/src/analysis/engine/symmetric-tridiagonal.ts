@@ -11,7 +11,7 @@
  * in Wilkinson & Reinsch, Handbook for Automatic Computation vol. II, 1971, procedure tql1).
  * Eigenvectors: inverse iteration on the tridiagonal matrix with partial pivoting, with
  * reorthogonalisation inside clusters of close eigenvalues (the method of LAPACK's dstein, with
- * a tighter cluster rule: see eigenvectorsByInverseIteration).
+ * a tighter cluster rule: see tridiagonalEigenvectors).
  * Both are O(n^2) in all, against O(n^3) for accumulating the QL rotations.
  */
 export interface TridiagonalEigen {
@@ -48,9 +48,25 @@ export function symmetricTridiagonalEigen(
   if (![...diagonal, ...offDiagonal].every(Number.isFinite)) {
     throw new RangeError('the matrix entries must be finite numbers');
   }
-  const values = eigenvaluesQL(diagonal, offDiagonal);
-  const vectors = eigenvectorsByInverseIteration(diagonal, offDiagonal, values);
+  const values = symmetricTridiagonalEigenvalues(diagonal, offDiagonal);
+  const vectors = tridiagonalEigenvectors(diagonal, offDiagonal, values);
   return { values, vectors };
+}
+
+/** The infinity norm of the symmetric tridiagonal matrix (largest absolute row sum). */
+export function tridiagonalNorm(
+  diagonal: readonly number[],
+  offDiagonal: readonly number[],
+): number {
+  const n = diagonal.length;
+  let norm = 0;
+  // Reads stay inside the arrays, which V8 needs to keep this loop fast.
+  for (let i = 0; i < n; i += 1) {
+    const before = i > 0 ? Math.abs(offDiagonal[i - 1]) : 0;
+    const after = i < n - 1 ? Math.abs(offDiagonal[i]) : 0;
+    norm = Math.max(norm, Math.abs(diagonal[i]) + before + after);
+  }
+  return norm;
 }
 
 /**
@@ -62,7 +78,11 @@ function radius(a: number, b: number): number {
   return squares > 1e-290 && squares < 1e290 ? Math.sqrt(squares) : Math.hypot(a, b);
 }
 
-function eigenvaluesQL(diagonal: readonly number[], offDiagonal: readonly number[]): number[] {
+/** The eigenvalues alone, ascending (accurate to about eps * ||T|| each). */
+export function symmetricTridiagonalEigenvalues(
+  diagonal: readonly number[],
+  offDiagonal: readonly number[],
+): number[] {
   const n = diagonal.length;
   const d = Float64Array.from(diagonal);
   const e = new Float64Array(n);
@@ -114,28 +134,37 @@ function eigenvaluesQL(diagonal: readonly number[], offDiagonal: readonly number
   return Array.from(d).sort((a, b) => a - b);
 }
 
-function eigenvectorsByInverseIteration(
+/**
+ * Unit eigenvectors for the given eigenvalues (ascending), by inverse iteration; the more
+ * accurate the values, the better the vectors.
+ *
+ * With `rootWeights` (sqrt of the diagonal of a positive diagonal W) the matrix given is T of the
+ * pencil T v = lambda W v, and the vectors returned are the unit x = W^1/2 v: the eigenvectors of
+ * W^-1/2 T W^-1/2 as before, but each solve factors T - lambda W itself. Its rounding is then
+ * relative to the size of T and W, not to that of W^-1/2 T W^-1/2, which a very light level of a
+ * building (a tiny w_i) makes huge; the vectors of the low modes keep their digits.
+ */
+export function tridiagonalEigenvectors(
   diagonal: readonly number[],
   offDiagonal: readonly number[],
   values: readonly number[],
+  rootWeights?: readonly number[],
 ): Float64Array[] {
   const n = diagonal.length;
   if (n === 1) return [Float64Array.of(1)];
-  let norm = 0;
-  // The infinity norm (largest absolute row sum); reads stay inside the arrays, which V8 needs
-  // to keep this loop fast.
-  for (let i = 0; i < n; i += 1) {
-    const before = i > 0 ? Math.abs(offDiagonal[i - 1]) : 0;
-    const after = i < n - 1 ? Math.abs(offDiagonal[i]) : 0;
-    norm = Math.max(norm, Math.abs(diagonal[i]) + before + after);
-  }
+  const weights = Float64Array.from(rootWeights ?? diagonal.map(() => 1), (r) => r * r);
+  const solverNorm = tridiagonalNorm(diagonal, offDiagonal);
+  // The scale of the standard-form matrix that sets the cluster rule: its norm, or for a pencil
+  // the pencil's norm over a typical weight (the median), which a few tiny weights do not inflate.
+  const sortedWeights = Float64Array.from(weights).sort();
+  const norm = rootWeights ? solverNorm / sortedWeights[n >> 1] : solverNorm;
   // Inverse iteration from an eigenvalue accurate to eps*norm gives a vector whose angle to its
   // neighbours' is about eps*norm/gap. Vectors whose eigenvalues lie closer than 1e-6*norm are
   // reorthogonalised, so the loss of orthogonality stays below about 1e-10. (dstein uses the
   // stricter 1e-3*norm, which turns the many close eigenvalues of a tall uniform building into
   // one large cluster and the work into O(n^3).)
   const clusterGap = 1e-6 * norm;
-  const solver = new ShiftedTridiagonalSolver(diagonal, offDiagonal, norm);
+  const solver = new ShiftedTridiagonalSolver(diagonal, offDiagonal, weights, solverNorm);
   const block = new Float64Array(n * n);
   const vectors: Float64Array[] = [];
   let clusterStart = 0;
@@ -150,7 +179,14 @@ function eigenvectorsByInverseIteration(
     const x = block.subarray(j * n, (j + 1) * n);
     startingVector(x, j);
     for (let iteration = 0; iteration < INVERSE_ITERATIONS; iteration += 1) {
-      solver.solveInPlace(x);
+      if (rootWeights) {
+        // (A - lambda I)^-1 x = W^1/2 (T - lambda W)^-1 W^1/2 x
+        for (let i = 0; i < n; i += 1) x[i] *= rootWeights[i];
+        solver.solveInPlace(x);
+        for (let i = 0; i < n; i += 1) x[i] *= rootWeights[i];
+      } else {
+        solver.solveInPlace(x);
+      }
       for (let k = clusterStart; k < j; k += 1) subtractProjection(x, vectors[k]);
       normalise(x);
     }
@@ -194,7 +230,8 @@ function normalise(x: Float64Array): void {
 }
 
 /**
- * LU factors, with row interchanges, of T - shift I for a symmetric tridiagonal T; a zero pivot
+ * LU factors, with row interchanges, of T - shift W for a symmetric tridiagonal T and a positive
+ * diagonal W (the identity for the standard problem); a zero pivot
  * is replaced by a tiny one, as inverse iteration wants (the solve then grows the eigenvector).
  */
 class ShiftedTridiagonalSolver {
@@ -211,6 +248,7 @@ class ShiftedTridiagonalSolver {
   constructor(
     private readonly diagonal: readonly number[],
     private readonly offDiagonal: readonly number[],
+    private readonly weights: Float64Array,
     norm: number,
   ) {
     this.n = diagonal.length;
@@ -224,14 +262,14 @@ class ShiftedTridiagonalSolver {
   }
 
   factor(shift: number): void {
-    const { n, u1, u2, u3, multipliers, swapped, diagonal, offDiagonal } = this;
+    const { n, u1, u2, u3, multipliers, swapped, diagonal, offDiagonal, weights } = this;
     // Row i of the working matrix: [a, b, c] in columns i, i+1, i+2.
-    let a = diagonal[0] - shift;
+    let a = diagonal[0] - shift * weights[0];
     let b = n > 1 ? offDiagonal[0] : 0;
     let c = 0;
     for (let i = 0; i < n - 1; i += 1) {
       const below = offDiagonal[i]; // T[i+1][i]
-      const nextDiagonal = diagonal[i + 1] - shift;
+      const nextDiagonal = diagonal[i + 1] - shift * weights[i + 1];
       const nextUpper = i + 1 < n - 1 ? offDiagonal[i + 1] : 0;
       if (Math.abs(a) >= Math.abs(below)) {
         swapped[i] = 0;
@@ -264,7 +302,7 @@ class ShiftedTridiagonalSolver {
     for (let i = 0; i < n; i += 1) inversePivots[i] = 1 / (Math.abs(u1[i]) < tiny ? tiny : u1[i]);
   }
 
-  /** Overwrites y with (T - shift I)^-1 y. */
+  /** Overwrites y with (T - shift W)^-1 y. */
   solveInPlace(y: Float64Array): void {
     const { n, u2, u3, multipliers, swapped, inversePivots } = this;
     for (let i = 0; i < n - 1; i += 1) {

@@ -125,11 +125,18 @@ describe('naturalModes', () => {
     }
   });
 
-  it('orders the modes from the longest period and puts +1 at the roof', () => {
+  it('orders the modes from the longest period and puts +1 at the roof where the roof moves', () => {
     const modes = naturalModes(randomBuilding(9, seededRandom(3)));
     modes.forEach((mode, i) => {
       expect(mode.number).toBe(i + 1);
-      expect(mode.shape[8]).toBe(1);
+      // Mode 8 of this building barely reaches the roof (1e-7 of its level-1 component): its
+      // shape is +1 at level 1 instead (hard-buildings.spec.ts).
+      if (mode.number === 8) {
+        expect([mode.shapeNormalisation, mode.normalisationLevel]).toEqual(['largest', 1]);
+      } else {
+        expect([mode.shapeNormalisation, mode.normalisationLevel]).toEqual(['roof', 9]);
+      }
+      expect(mode.shape[mode.normalisationLevel - 1]).toBe(1);
       if (i > 0) expect(mode.period).toBeLessThan(modes[i - 1].period);
       expect(mode.frequency).toBeCloseTo(1 / mode.period, 12);
     });

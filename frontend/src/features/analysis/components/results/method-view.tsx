@@ -1,5 +1,9 @@
 import { Box, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
-import type { AnalysisResponse, StoreyInput } from '@tiermode/shared-types';
+import {
+  shapeNormalisationNote,
+  type AnalysisResponse,
+  type StoreyInput,
+} from '@tiermode/shared-types';
 import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 
 const MAX_STOREYS_SHOWN = 6;
@@ -81,7 +85,7 @@ export function MethodView({
             <TableCell>Mode</TableCell>
             <TableCell align="right">ω² (rad²/s²)</TableCell>
             <TableCell align="right">T (s)</TableCell>
-            <TableCell align="right">φ (roof = 1), storey 1 → roof</TableCell>
+            <TableCell align="right">φ (roof = 1 unless noted), storey 1 → roof</TableCell>
             <TableCell align="right">Γ</TableCell>
             <TableCell align="right">M* (t)</TableCell>
             <TableCell align="right">Sa (g)</TableCell>
@@ -97,6 +101,7 @@ export function MethodView({
               <TableCell align="right">{mode.period.toFixed(4)}</TableCell>
               <TableCell align="right">
                 {mode.shape.map((v) => formatNumber(v)).join(', ')}
+                {shapeNormalisationNote(mode) && ` (${shapeNormalisationNote(mode)})`}
               </TableCell>
               <TableCell align="right">{formatNumber(mode.participationFactor)}</TableCell>
               <TableCell align="right">{formatNumber(mode.effectiveMass / 1000)}</TableCell>

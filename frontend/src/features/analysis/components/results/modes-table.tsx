@@ -1,5 +1,13 @@
-import { Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
-import type { ModeResult } from '@tiermode/shared-types';
+import {
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
+import { shapeNormalisationNote, type ModeResult } from '@tiermode/shared-types';
 import { formatNumber } from '@/lib/units';
 
 /** Periods, frequencies, participation and effective masses, one mode a row. */
@@ -12,7 +20,7 @@ export function ModesTable({ modes }: { modes: ModeResult[] }) {
             <TableCell>Mode</TableCell>
             <TableCell align="right">Period (s)</TableCell>
             <TableCell align="right">Frequency (Hz)</TableCell>
-            <TableCell align="right">Participation factor Γ (roof = 1)</TableCell>
+            <TableCell align="right">Participation factor Γ (roof = 1 unless noted)</TableCell>
             <TableCell align="right">Effective modal mass (%)</TableCell>
             <TableCell align="right">Cumulative mass ratio (%)</TableCell>
             <TableCell align="right">Sa (g)</TableCell>
@@ -24,7 +32,14 @@ export function ModesTable({ modes }: { modes: ModeResult[] }) {
               <TableCell>{m.number}</TableCell>
               <TableCell align="right">{m.period.toFixed(4)}</TableCell>
               <TableCell align="right">{m.frequency.toFixed(3)}</TableCell>
-              <TableCell align="right">{formatNumber(m.participationFactor)}</TableCell>
+              <TableCell align="right">
+                {formatNumber(m.participationFactor)}
+                {shapeNormalisationNote(m) && (
+                  <Typography variant="caption" sx={{ display: 'block', color: 'warning.main' }}>
+                    {shapeNormalisationNote(m)}
+                  </Typography>
+                )}
+              </TableCell>
               <TableCell align="right">{(m.effectiveMassRatio * 100).toFixed(2)}</TableCell>
               <TableCell align="right">{(m.cumulativeMassRatio * 100).toFixed(2)}</TableCell>
               <TableCell align="right">{m.sa.toFixed(4)}</TableCell>
