@@ -52,6 +52,8 @@ describe('POST /api/analysis', () => {
         'response',
         'sa',
         'shape',
+        'shapeNormalisation',
+        'normalisationLevel',
       ].sort(),
     );
     expect(Object.keys(body.modes[0].response).sort()).toEqual([

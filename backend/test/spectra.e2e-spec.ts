@@ -36,6 +36,37 @@ describe('POST /api/spectra/generate', () => {
       .expect(200);
   });
 
+  it('returns the source, which the analysis and a calc take with the table', async () => {
+    const res = await post({ kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 4, maxPeriod: 5 });
+    expect(res.body.source).toEqual({
+      kind: 'asce7-two-period',
+      parameters: { sds: 1, sd1: 0.6, tl: 4, maxPeriod: 5 },
+    });
+    // One storey of T = 2 pi s, past the table's 5 s: the T > TL branch SD1 TL / T^2
+    // (ASCE 7-16 11.4.6, clause from memory).
+    const analysis = (spectrum: object) =>
+      request(app.getHttpServer())
+        .post('/api/analysis')
+        .set('Authorization', `Bearer ${token}`)
+        .send({
+          storeys: [{ mass: 1e5, stiffness: 1e5, height: 4 }],
+          spectrum,
+          dampingRatio: 0.05,
+        });
+    const { points, interpolation, source } = res.body;
+    const ok = await analysis({ points, interpolation, source }).expect(200);
+    expect(ok.body.modes[0].sa).toBeCloseTo((0.6 * 4) / (2 * Math.PI) ** 2, 12);
+    const bad = await analysis({
+      points,
+      source: { kind: 'asce7-two-period', parameters: { sds: 1, sd1: 0.6, tl: 400 } },
+    }).expect(400);
+    expect(bad.body.message).toContain('spectrum.source: parameters.tl must be at most 50 (s)');
+    const unknown = await analysis({ points, source: { kind: 'mine' } }).expect(400);
+    expect(unknown.body.message).toContain(
+      'spectrum.source: kind must be one of: user, asce7-two-period, en1998-elastic, en1998-design',
+    );
+  });
+
   it('returns EN 1998-1 elastic and design tables', async () => {
     const elastic = await post({
       kind: 'en1998-elastic',

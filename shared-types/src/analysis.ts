@@ -25,6 +25,13 @@ export type SpectrumInterpolation = 'linear' | 'log-log';
 export interface SpectrumInput {
   points: SpectrumPointInput[];
   interpolation?: SpectrumInterpolation;
+  /**
+   * Where the table came from: a generator and its parameters (as `/api/spectra/generate`
+   * returns it), or `user` for a typed or uploaded table. Absent means `user`. Where a generated
+   * table still matches its generator, periods past its end take the code's own long-period
+   * branch instead of the last value.
+   */
+  source?: SpectrumSource;
 }
 
 export const ANALYSIS_LIMITS = {
@@ -200,7 +207,17 @@ export interface SpectrumGenerateResponse {
   interpolation: SpectrumInterpolation;
   /** The clause the table follows, as the software reads it. */
   basis: string;
+  /** The generator and the parameters given, to store with the table. */
+  source: SpectrumSource;
 }
+
+/** A generator's parameters: the generate request without its `kind`. */
+export type SpectrumGeneratorParameters = Omit<SpectrumGenerateRequest, 'kind'>;
+
+/** `inputs.spectrum.source`. */
+export type SpectrumSource =
+  | { kind: 'user' }
+  | { kind: SpectrumGeneratorKind; parameters: SpectrumGeneratorParameters };
 
 /** `POST /api/analysis/column-stiffness`: a storey's lateral stiffness from its columns. */
 export type ColumnFixity = 'fixed-fixed' | 'fixed-pinned';

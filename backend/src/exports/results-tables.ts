@@ -25,12 +25,12 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
       'Period (s)',
       'Frequency (Hz)',
       'Circular frequency (rad/s)',
-      'Participation factor',
-      'Shape +1 at level',
+      'Participation factor (shape +1 at the level in the last column)',
       'Effective modal mass (t)',
       'Effective mass ratio (%)',
       'Cumulative mass ratio (%)',
       'Sa (g)',
+      'Shape +1 at level',
     ],
     rows: analysis.modes.map((m) => [
       m.number,
@@ -38,12 +38,12 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
       m.frequency,
       m.circularFrequency,
       m.participationFactor,
-      // The roof unless the roof barely moves in this mode (analyses before engine 1.1: roof).
-      m.normalisationLevel ?? analysis.modes[0].shape.length,
       m.effectiveMass * T,
       m.effectiveMassRatio * 100,
       m.cumulativeMassRatio * 100,
       m.sa,
+      // The roof unless the roof barely moves in this mode (analyses before engine 1.1: roof).
+      m.normalisationLevel ?? inputs.storeys.length,
     ]),
   };
   const storeyHeaders = [

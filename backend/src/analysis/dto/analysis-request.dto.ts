@@ -3,6 +3,7 @@ import {
   type AnalysisRequest,
   type SpectrumInput,
   type SpectrumInterpolation,
+  type SpectrumSource,
   type SpectrumPointInput,
   type StoreyInput,
 } from '@tiermode/shared-types';
@@ -23,6 +24,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { IsSpectrumSource } from './spectrum-source.dto';
 import { IsOmittable } from '../../common/validation/is-omittable';
 
 const FINITE = { allowNaN: false, allowInfinity: false };
@@ -73,6 +75,10 @@ export class SpectrumDto implements SpectrumInput {
   @IsOmittable()
   @IsIn(['linear', 'log-log'], { message: 'interpolation must be "linear" or "log-log"' })
   interpolation?: SpectrumInterpolation;
+
+  @IsOmittable()
+  @IsSpectrumSource()
+  source?: SpectrumSource;
 }
 
 /** `POST /api/analysis`; the periods' order is checked by the engine, which names the point. */

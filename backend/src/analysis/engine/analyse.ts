@@ -8,6 +8,7 @@ import { assertStoreys, type Storey } from './shear-building';
 import { assertSpectrum, spectralAcceleration } from './spectrum';
 import { analysisWarnings, type CodeBasisCode } from './analysis-warnings';
 import { plausibilityFlags } from './plausibility';
+import { beyondTheTable } from './spectrum-source';
 
 /** Bumped whenever a change to the engine could change a number it returns. */
 export const ENGINE_VERSION = '1.1.0';
@@ -58,8 +59,13 @@ export function analyse(
       targetMassRatio: request.targetMassRatio,
     }),
   );
+  const end = beyondTheTable(spectrum);
+  const lastPeriod = spectrum.points[spectrum.points.length - 1].period;
   const modes: ModeResult[] = used.map((mode) => {
-    const { sa } = spectralAcceleration(spectrum.points, mode.period, interpolation);
+    const sa =
+      end.kind === 'formula' && mode.period > lastPeriod
+        ? end.sa(mode.period)
+        : spectralAcceleration(spectrum.points, mode.period, interpolation).sa;
     return {
       number: mode.number,
       period: mode.period,
@@ -79,7 +85,12 @@ export function analyse(
 
   const warnings = analysisWarnings(
     used,
-    { first: spectrum.points[0].period, last: spectrum.points[spectrum.points.length - 1].period },
+    {
+      first: spectrum.points[0].period,
+      last: lastPeriod,
+      formulaBeyond: end.kind === 'formula' ? end.basis : undefined,
+      editedAtPoint: end.kind === 'edited' ? end.point : undefined,
+    },
     codeBasis,
     storeys.map((s) => s.mass),
   );

@@ -28,6 +28,10 @@ export interface ModeForWarnings {
 export interface TableRange {
   first: number;
   last: number;
+  /** Set where periods past the end took the generator's formula: the clause it follows. */
+  formulaBeyond?: string;
+  /** Set where the source names a generator the table no longer matches: the first point off. */
+  editedAtPoint?: number;
 }
 
 /** The clause each warning cites, by the calc's code basis; none: the trade's common practice. */
@@ -68,9 +72,16 @@ export function analysisWarnings(
   const below = modes.filter((m) => m.period < table.first);
   const above = modes.filter((m) => m.period > table.last);
   // Long periods first: the fundamental modes, which hold most of the mass, are there.
+  if (table.editedAtPoint !== undefined) {
+    warnings.push(
+      `The spectrum table no longer matches its generator (point ${table.editedAtPoint} differs), so it is read as a typed table${above.length > 0 ? ': past its end its last value is used' : ''}.`,
+    );
+  }
   if (above.length > 0) {
     warnings.push(
-      `${listModes(above)}: ${periods(above)} above the spectrum table (which ends at ${table.last} s); its last value was used.`,
+      table.formulaBeyond
+        ? `${listModes(above)}: ${periods(above)} above the spectrum table (which ends at ${table.last} s); Sa was taken from the generator's own formula there (${table.formulaBeyond}).`
+        : `${listModes(above)}: ${periods(above)} above the spectrum table (which ends at ${table.last} s); its last value was used.`,
     );
   }
   if (below.length > 0) {

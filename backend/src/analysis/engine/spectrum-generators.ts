@@ -1,4 +1,11 @@
-import { SPECTRUM_GENERATOR_LIMITS, type GroundType } from '@tiermode/shared-types';
+import {
+  SPECTRUM_GENERATOR_LIMITS,
+  type GroundType,
+  type SpectrumGenerateRequest,
+  type SpectrumGeneratorParameters,
+  type SpectrumInterpolation,
+  type SpectrumSource,
+} from '@tiermode/shared-types';
 import type { SpectrumPoint } from './spectrum';
 
 /**
@@ -6,6 +13,12 @@ import type { SpectrumPoint } from './spectrum';
  * branch point exactly and samples the curved branches densely enough for linear interpolation
  * (the 1/T and 1/T^2 branches are also exact under log-log interpolation between the samples).
  */
+
+/** A generated table and the formula it samples, Sa (g) at any period T (s). */
+interface Formula {
+  points: SpectrumPoint[];
+  sa: (period: number) => number;
+}
 
 /** Periods from `from` to `to` (exclusive of `from`, inclusive of `to`), finer at short periods. */
 function samplePeriods(from: number, to: number): number[] {
@@ -50,6 +63,10 @@ export interface Asce7TwoPeriodInput {
  * SD1 TL / T^2 for T > TL.
  */
 export function asce7TwoPeriodSpectrum(input: Asce7TwoPeriodInput): SpectrumPoint[] {
+  return asce7TwoPeriod(input).points;
+}
+
+function asce7TwoPeriod(input: Asce7TwoPeriodInput): Formula {
   const { sds, sd1, tl } = input;
   positive('sds', sds);
   positive('sd1', sd1);
@@ -64,7 +81,10 @@ export function asce7TwoPeriodSpectrum(input: Asce7TwoPeriodInput): SpectrumPoin
   if (maxPeriod <= ts) throw new RangeError('maxPeriod must be longer than Ts = SD1/SDS');
   const sa = (t: number) =>
     t < t0 ? sds * (0.4 + (0.6 * t) / t0) : t <= ts ? sds : t <= tl ? sd1 / t : (sd1 * tl) / t ** 2;
-  return toPoints([0, t0, ts, tl, maxPeriod], samplePeriods(ts, maxPeriod), maxPeriod, sa);
+  return {
+    points: toPoints([0, t0, ts, tl, maxPeriod], samplePeriods(ts, maxPeriod), maxPeriod, sa),
+    sa,
+  };
 }
 
 export type En1998SpectrumType = 1 | 2;
@@ -132,6 +152,10 @@ export function dampingCorrection(dampingPercent: number): number {
 export function en1998ElasticSpectrum(
   input: En1998Input & { dampingPercent?: number },
 ): SpectrumPoint[] {
+  return en1998Elastic(input).points;
+}
+
+function en1998Elastic(input: En1998Input & { dampingPercent?: number }): Formula {
   const { ag, s, tb, tc, td, maxPeriod } = groundParameters(input);
   const eta = dampingCorrection(input.dampingPercent ?? 5);
   const plateau = 2.5 * ag * s * eta;
@@ -143,7 +167,10 @@ export function en1998ElasticSpectrum(
         : t <= td
           ? (plateau * tc) / t
           : (plateau * tc * td) / t ** 2;
-  return toPoints([0, tb, tc, td, maxPeriod], samplePeriods(tb, maxPeriod), maxPeriod, sa);
+  return {
+    points: toPoints([0, tb, tc, td, maxPeriod], samplePeriods(tb, maxPeriod), maxPeriod, sa),
+    sa,
+  };
 }
 
 /**
@@ -155,6 +182,10 @@ export function en1998ElasticSpectrum(
 export function en1998DesignSpectrum(
   input: En1998Input & { q: number; beta?: number },
 ): SpectrumPoint[] {
+  return en1998Design(input).points;
+}
+
+function en1998Design(input: En1998Input & { q: number; beta?: number }): Formula {
   const { ag, s, tb, tc, td, maxPeriod } = groundParameters(input);
   positive('q', input.q);
   const beta = input.beta ?? 0.2;
@@ -174,7 +205,7 @@ export function en1998DesignSpectrum(
           ? Math.max((plateau * tc) / t, floor)
           : Math.max((plateau * tc * td) / t ** 2, floor);
   const breakpoints = [0, tb, tc, td, maxPeriod, ...(corner > tc ? [corner] : [])];
-  return toPoints(breakpoints, samplePeriods(tb, maxPeriod), maxPeriod, sa);
+  return { points: toPoints(breakpoints, samplePeriods(tb, maxPeriod), maxPeriod, sa), sa };
 }
 
 /**
@@ -196,4 +227,62 @@ function toPoints(
   return periods
     .filter((t, i) => i === 0 || t - periods[i - 1] > 1e-9)
     .map((period) => ({ period, sa: sa(period) }));
+}
+
+/** A generated spectrum: the table, the formula behind it and the clause both follow. */
+export interface GeneratedSpectrum extends Formula {
+  interpolation: SpectrumInterpolation;
+  basis: string;
+  /** The spectrum's source as a calc stores it: the generator and its parameters. */
+  source: SpectrumSource;
+}
+
+/**
+ * The generator a request names, with its parameters. Throws RangeError naming the field when
+ * a parameter is out of range (the request DTO has checked the types and which fields are set).
+ */
+export function generateSpectrum(request: SpectrumGenerateRequest): GeneratedSpectrum {
+  const { kind, ...given } = request;
+  // Only the parameters given, in a fixed order: the source is sealed with the calc.
+  const parameters = Object.fromEntries(
+    Object.entries(given).filter(([, value]) => value !== undefined && value !== null),
+  ) as SpectrumGeneratorParameters;
+  const source: SpectrumSource = { kind, parameters };
+  const en = () => ({
+    agR: request.agR as number,
+    importanceFactor: request.importanceFactor,
+    groundType: request.groundType as GroundType,
+    spectrumType: request.spectrumType as En1998SpectrumType,
+    maxPeriod: request.maxPeriod,
+  });
+  switch (kind) {
+    case 'asce7-two-period':
+      return {
+        ...asce7TwoPeriod({
+          sds: request.sds as number,
+          sd1: request.sd1 as number,
+          tl: request.tl as number,
+          maxPeriod: request.maxPeriod,
+        }),
+        interpolation: 'log-log',
+        basis: 'ASCE 7-16 11.4.6 two-period design response spectrum (ASCE 7-22 11.4.5.2)',
+        source,
+      };
+    case 'en1998-elastic':
+      return {
+        ...en1998Elastic({ ...en(), dampingPercent: request.dampingPercent }),
+        interpolation: 'log-log',
+        basis: `EN 1998-1:2004 3.2.2.2 elastic spectrum, Type ${request.spectrumType}, ground ${request.groundType}`,
+        source,
+      };
+    case 'en1998-design':
+      return {
+        ...en1998Design({ ...en(), q: request.q as number, beta: request.beta }),
+        interpolation: 'log-log',
+        basis: `EN 1998-1:2004 3.2.2.5 design spectrum, Type ${request.spectrumType}, ground ${request.groundType}, q = ${request.q}`,
+        source,
+      };
+    default:
+      throw new RangeError('kind must be one of: asce7-two-period, en1998-elastic, en1998-design');
+  }
 }

@@ -24,7 +24,11 @@ export function SpectrumEditor({
   readOnly = false,
 }: SpectrumEditorProps) {
   const rows: PointRow[] = spectrum.points.map((p, id) => ({ id, ...p }));
-  const setPoints = (points: SpectrumInput['points']) => onChange({ ...spectrum, points });
+  // Any change to the points makes the table the engineer's own: past its end the last value is
+  // used then, not the generator's formula.
+  const setPoints = (points: SpectrumInput['points']) =>
+    onChange({ ...spectrum, points, source: { kind: 'user' } });
+  const generator = spectrum.source && spectrum.source.kind !== 'user' ? spectrum.source : null;
   const pointColumns: GridColDef<PointRow>[] = [
     {
       field: 'period',
@@ -53,7 +57,9 @@ export function SpectrumEditor({
     <Stack spacing={2}>
       {!readOnly && (
         <SpectrumGeneratorForm
-          onGenerated={(g) => onChange({ points: g.points, interpolation: g.interpolation })}
+          onGenerated={(g) =>
+            onChange({ points: g.points, interpolation: g.interpolation, source: g.source })
+          }
         />
       )}
       <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2}>
@@ -102,9 +108,18 @@ export function SpectrumEditor({
           >
             Add a point
           </Button>
+          {generator && (
+            <Typography variant="caption" data-testid="spectrum-source">
+              Generated ({generator.kind}):{' '}
+              {Object.entries(generator.parameters)
+                .map(([name, value]) => `${name} ${String(value)}`)
+                .join(', ')}
+              . Past the table's end the generator's own formula gives Sa.
+            </Typography>
+          )}
           <Typography variant="caption" color="text.secondary">
-            Periods must increase down the table. Outside it the nearest end value is used, with a
-            warning.
+            Periods must increase down the table. Outside a typed or edited table the nearest end
+            value is used, with a warning.
           </Typography>
         </Stack>
         <Box sx={{ flex: 1, minWidth: 0 }}>
