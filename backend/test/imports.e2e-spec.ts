@@ -70,6 +70,72 @@ describe('POST /api/imports/storeys', () => {
     ]);
   });
 
+  // Decimal and grouping conventions of English and continental European spreadsheets (common
+  // practice; ISO 80000-1:2009 7.3.1 allows either decimal mark, clause from memory).
+  it('reads a semicolon CSV with decimal commas, and says how it read it', async () => {
+    const csv =
+      'Label;Height (m);Mass (t);Stiffness (kN/m)\nNiveau 1;3,5;1.020;780.000\nNiveau 2;3,25;640;520000\n';
+    const res = await upload(csv, 'storeys.csv').expect(200);
+    expect(res.body.readAs).toEqual({ delimiter: 'semicolon', decimal: 'comma' });
+    expect(res.body.storeys).toEqual([
+      { label: 'Niveau 1', height: 3.5, mass: 1_020_000, stiffness: 780_000_000 },
+      { label: 'Niveau 2', height: 3.25, mass: 640_000, stiffness: 520_000_000 },
+    ]);
+  });
+
+  it('reads quoted thousands separators where a decimal point settles the convention', async () => {
+    const csv = 'Label,Height (m),Mass (t),Stiffness (kN/m)\nL1,4.5,"1,020","780,000"\n';
+    const res = await upload(csv, 'storeys.csv').expect(200);
+    expect(res.body.readAs).toEqual({ delimiter: 'comma', decimal: 'point' });
+    expect(res.body.storeys[0]).toEqual({
+      label: 'L1',
+      height: 4.5,
+      mass: 1_020_000,
+      stiffness: 780_000_000,
+    });
+  });
+
+  it('refuses a row split by a comma inside a number, and an ambiguous cell, naming row and column', async () => {
+    const split =
+      'Label,Height (m),Mass (t),Stiffness (kN/m)\nL1,4.5,640,780000\nL2,3.5,1,020,780000\n';
+    const res = await upload(split, 'storeys.csv').expect(400);
+    expect(res.body.errors).toEqual([
+      {
+        row: 3,
+        column: 'row',
+        message:
+          '5 cells where the header has 4: a comma inside a number (a thousands separator or a decimal comma)? Separate the columns with semicolons',
+      },
+    ]);
+    const ambiguous = 'Label;Height (m);Mass (t);Stiffness (kN/m)\nL1;4;640;780.000\n';
+    const refused = await upload(ambiguous, 'storeys.csv').expect(400);
+    expect(refused.body.readAs.decimal).toBeNull();
+    expect(refused.body.errors).toEqual([
+      {
+        row: 2,
+        column: 'Stiffness (kN/m)',
+        message:
+          '"780.000" reads as 780 with a decimal point or 780000 with a decimal comma: choose how to read numbers',
+      },
+    ]);
+    // Told how to read it, the same file reads.
+    const told = await http()
+      .post('/api/imports/storeys')
+      .set(as('designer'))
+      .field('units', 'SI')
+      .field('decimal', 'comma')
+      .attach('file', Buffer.from(ambiguous), 'storeys.csv')
+      .expect(200);
+    expect(told.body.storeys[0].stiffness).toBe(780_000_000);
+    await http()
+      .post('/api/imports/storeys')
+      .set(as('designer'))
+      .field('units', 'SI')
+      .field('decimal', 'dot')
+      .attach('file', Buffer.from(ambiguous), 'storeys.csv')
+      .expect(400);
+  });
+
   it.each([
     [
       'a missing column',
@@ -196,7 +262,18 @@ describe('POST /api/imports/spectrum', () => {
         { period: 4, sa: 0.15 },
       ],
       errors: [],
+      readAs: { delimiter: 'comma', decimal: 'point' },
     });
+  });
+
+  it('reads a semicolon table with decimal commas (the period 3,5 s is 3.5 s, not 35 s)', async () => {
+    const res = await send('Period (s);Sa (g)\n0;0,4\n0,6;1\n3,5;0,171\n').expect(200);
+    expect(res.body.points).toEqual([
+      { period: 0, sa: 0.4 },
+      { period: 0.6, sa: 1 },
+      { period: 3.5, sa: 0.171 },
+    ]);
+    expect(res.body.readAs).toEqual({ delimiter: 'semicolon', decimal: 'comma' });
   });
 
   it.each([

@@ -1,3 +1,4 @@
+import type { DecimalMark, Delimiter } from './number-format';
 /**
  * `POST /api/analysis` (any signed-in user). SI base units throughout: kg, N/m, m, s, N, N*m;
  * spectral accelerations in g. Arrays are per storey; index 0 = storey 1 / level 1 (at the base).
@@ -267,16 +268,28 @@ export interface ImportCellError {
   message: string;
 }
 
+/**
+ * How an uploaded table was read: the CSV column separator (null for a workbook) and the
+ * decimal mark, as asked for (the upload's `decimal` field) or as its cells settle it (null:
+ * none did, and cells that read two ways were refused as ambiguous).
+ */
+export interface ImportReadAs {
+  delimiter: Delimiter | null;
+  decimal: DecimalMark | null;
+}
+
 /** `POST /api/imports/storeys`: the storeys read and every problem found. */
 export interface StoreyImportResponse {
   storeys: ImportedStorey[];
   errors: ImportCellError[];
+  readAs: ImportReadAs;
 }
 
 /** `POST /api/imports/spectrum`: the points read and every problem found. */
 export interface SpectrumImportResponse {
   points: SpectrumPointInput[];
   errors: ImportCellError[];
+  readAs: ImportReadAs;
 }
 
 /**

@@ -8,3 +8,4 @@ export * from './projects';
 export * from './calculations';
 export * from './audit';
 export * from './checks';
+export * from './number-format';

@@ -12,6 +12,7 @@ import {
 } from '@nestjs/common';
 import {
   DISPLAY_UNITS,
+  type DecimalMark,
   type DisplayUnits,
   type ImportCellError,
   type SpectrumImportResponse,
@@ -40,6 +41,13 @@ function unitsOf(value: unknown): DisplayUnits {
  * A result with problems leaves as a 400 that still carries the preview: what was read and
  * every problem, by row and column, so the user can fix the file (or the grid) without guessing.
  */
+/** The upload's `decimal` field: how to read numbers, where the file does not settle it. */
+function decimalOf(value: unknown): DecimalMark | undefined {
+  if (value === undefined || value === '') return undefined;
+  if (value === 'point' || value === 'comma') return value;
+  throw new BadRequestException(['decimal must be "point" (1,234.5) or "comma" (1.234,5)']);
+}
+
 function refuseWithPreview<T extends { errors: ImportCellError[] }>(result: T): T {
   if (result.errors.length === 0) return result;
   throw new BadRequestException({
@@ -58,7 +66,10 @@ export class ImportsController {
     returns: 'StoreyImportResponse',
     upload: {
       description: 'The table, and its units',
-      fields: { units: { type: 'string', enum: ['SI', 'US'] } },
+      fields: {
+        units: { type: 'string', enum: ['SI', 'US'] },
+        decimal: { type: 'string', enum: ['point', 'comma'] },
+      },
     },
   })
   @Post('storeys')
@@ -72,14 +83,18 @@ export class ImportsController {
   ): Promise<StoreyImportResponse> {
     const units = unitsOf(body?.units);
     if (!file) throw new BadRequestException(['file must be a CSV or XLSX storey table']);
-    const { storeys, errors } = parseStoreyTable(await readTable(file.buffer), units);
-    return refuseWithPreview({ storeys, errors });
+    return refuseWithPreview(
+      parseStoreyTable(await readTable(file.buffer), units, decimalOf(body?.decimal)),
+    );
   }
 
   @ApiContract({
     summary: 'Read a design spectrum table (CSV or XLSX); nothing is stored',
     returns: 'SpectrumImportResponse',
-    upload: { description: 'The table of period and Sa' },
+    upload: {
+      description: 'The table of period and Sa',
+      fields: { decimal: { type: 'string', enum: ['point', 'comma'] } },
+    },
   })
   @Post('spectrum')
   @Expensive()
@@ -88,9 +103,12 @@ export class ImportsController {
   @UseInterceptors(uploadLimits(TABLE_LIMIT, '2 MB'))
   async spectrum(
     @UploadedFile() file: Express.Multer.File | undefined,
+    @Body() body: Record<string, unknown>,
   ): Promise<SpectrumImportResponse> {
     if (!file) throw new BadRequestException(['file must be a CSV or XLSX table of period and Sa']);
-    return refuseWithPreview(parseSpectrumTable(await readTable(file.buffer)));
+    return refuseWithPreview(
+      parseSpectrumTable(await readTable(file.buffer), decimalOf(body?.decimal)),
+    );
   }
 
   @ApiContract({ summary: 'The storey table template as CSV (units=SI or US)', file: 'text/csv' })

@@ -1,22 +1,34 @@
 import { BadRequestException } from '@nestjs/common';
 import ExcelJS from 'exceljs';
+import { DELIMITER_CHARACTERS, detectDelimiter, type Delimiter } from '@tiermode/shared-types';
 import Papa from 'papaparse';
 import { detectKind } from './file-checks';
 import { unpackXlsx } from './xlsx-package';
 
+/** The cells as text, and the separator a CSV file was read with (null for a workbook). */
+export interface TableCells {
+  cells: string[][];
+  delimiter: Delimiter | null;
+}
+
 /**
- * The cells of an uploaded table as text, whichever format it came in: CSV (papaparse; comma,
- * semicolon or tab separated) or the first sheet of an XLSX workbook (exceljs), after the
- * workbook's package has been checked. Anything else is refused, whatever its name says.
+ * The cells of an uploaded table as text, whichever format it came in: CSV (papaparse, with the
+ * separator every line holds: tab, else semicolon, else comma) or the first sheet of an XLSX
+ * workbook (exceljs), after the workbook's package has been checked. Anything else is refused,
+ * whatever its name says.
  */
-export async function readTable(bytes: Buffer): Promise<string[][]> {
+export async function readTable(bytes: Buffer): Promise<TableCells> {
   if (bytes.length === 0) throw new BadRequestException(['file is empty']);
   const kind = detectKind(bytes);
   if (kind === 'text') {
-    const parsed = Papa.parse<string[]>(bytes.toString('utf8').replace(/^\uFEFF/, ''), {
+    const text = bytes.toString('utf8').replace(/^\uFEFF/, '');
+    const lines = text.split(/\r\n|\n|\r/).filter((line) => line.trim() !== '');
+    const delimiter = detectDelimiter(lines, 'comma');
+    const parsed = Papa.parse<string[]>(text, {
       skipEmptyLines: false,
+      delimiter: delimiter === 'space' ? ' ' : DELIMITER_CHARACTERS[delimiter],
     });
-    return parsed.data.map((row) => row.map((cell) => String(cell ?? '')));
+    return { cells: parsed.data.map((row) => row.map((cell) => String(cell ?? ''))), delimiter };
   }
   if (kind === 'xlsx') {
     const unpacked = await unpackXlsx(bytes);
@@ -33,7 +45,7 @@ export async function readTable(bytes: Buffer): Promise<string[][]> {
       const values = Array.isArray(row.values) ? row.values.slice(1) : [];
       rows[number - 1] = values.map(cellText);
     });
-    return Array.from(rows, (row) => row ?? []);
+    return { cells: Array.from(rows, (row) => row ?? []), delimiter: null };
   }
   throw new BadRequestException([
     `file must be a CSV or XLSX table; this one is ${kind === 'unknown' ? 'neither' : `a ${kind.toUpperCase()} file`}`,

@@ -1,9 +1,12 @@
 import {
   ANALYSIS_LIMITS,
+  type DecimalMark,
   type ImportCellError,
+  type ImportReadAs,
   type SpectrumPointInput,
 } from '@tiermode/shared-types';
-import { numberCell, nonBlankRows } from './cells';
+import { cellCountProblem, numberCell, nonBlankRows, readAsFor } from './cells';
+import type { TableCells } from './read-table';
 
 const PERIOD = 'Period (s)';
 const SA = 'Sa (g)';
@@ -13,13 +16,22 @@ const SA = 'Sa (g)';
  * are the only ones taken), then one point per row with periods increasing. Problems are named by
  * spreadsheet row (the header is row 1) and column.
  */
-export function parseSpectrumTable(cells: readonly (readonly string[])[]): {
+export function parseSpectrumTable(
+  { cells, delimiter }: TableCells,
+  decimal?: DecimalMark,
+): {
   points: SpectrumPointInput[];
   errors: ImportCellError[];
+  readAs: ImportReadAs;
 } {
   const rows = nonBlankRows(cells);
+  let readAs: ImportReadAs = { delimiter, decimal: decimal ?? null };
   if (rows.length === 0) {
-    return { points: [], errors: [{ row: 1, column: 'file', message: 'The file has no rows' }] };
+    return {
+      points: [],
+      errors: [{ row: 1, column: 'file', message: 'The file has no rows' }],
+      readAs,
+    };
   }
   const header = cells[rows[0]].map((h) => h.trim().toLowerCase());
   const find = (name: string) =>
@@ -41,11 +53,21 @@ export function parseSpectrumTable(cells: readonly (readonly string[])[]): {
       });
     }
   }
-  if (errors.length > 0) return { points: [], errors };
+  if (errors.length > 0) return { points: [], errors, readAs };
+  readAs = readAsFor(
+    rows.slice(1).flatMap((r) => [cells[r][periodAt] ?? '', cells[r][saAt] ?? '']),
+    delimiter,
+    decimal,
+  );
   const points: SpectrumPointInput[] = [];
   for (const r of rows.slice(1)) {
-    const period = numberCell(cells[r][periodAt], true);
-    const sa = numberCell(cells[r][saAt], true);
+    const miscounted = cellCountProblem(cells[r], cells[rows[0]], delimiter);
+    if (miscounted) {
+      errors.push({ row: r + 1, column: 'row', message: miscounted });
+      continue;
+    }
+    const period = numberCell(cells[r][periodAt], true, readAs.decimal);
+    const sa = numberCell(cells[r][saAt], true, readAs.decimal);
     if ('problem' in period) errors.push({ row: r + 1, column: PERIOD, message: period.problem });
     if ('problem' in sa) errors.push({ row: r + 1, column: SA, message: sa.problem });
     if ('value' in period && 'value' in sa) {
@@ -75,5 +97,5 @@ export function parseSpectrumTable(cells: readonly (readonly string[])[]): {
       message: `At most ${ANALYSIS_LIMITS.maxSpectrumPoints} points`,
     });
   }
-  return { points, errors };
+  return { points, errors, readAs };
 }

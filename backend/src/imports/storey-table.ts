@@ -1,6 +1,13 @@
-import type { DisplayUnits, ImportCellError, ImportedStorey } from '@tiermode/shared-types';
+import type {
+  DecimalMark,
+  DisplayUnits,
+  ImportCellError,
+  ImportedStorey,
+  ImportReadAs,
+} from '@tiermode/shared-types';
 import { ANALYSIS_LIMITS } from '@tiermode/shared-types';
-import { numberCell } from './cells';
+import { cellCountProblem, numberCell, readAsFor } from './cells';
+import type { TableCells } from './read-table';
 
 /**
  * Exact conversion factors to SI (NIST SP 811, appendix B): 1 ft = 0.3048 m; 1 lbf =
@@ -80,14 +87,20 @@ const split = (header: string) => {
  * fixed there. Blank rows are skipped.
  */
 export function parseStoreyTable(
-  cells: readonly (readonly string[])[],
+  { cells, delimiter }: TableCells,
   units: DisplayUnits,
-): { storeys: ImportedStorey[]; errors: ImportCellError[] } {
+  decimal?: DecimalMark,
+): { storeys: ImportedStorey[]; errors: ImportCellError[]; readAs: ImportReadAs } {
   const columns = STOREY_COLUMNS[units];
   const errors: ImportCellError[] = [];
   const nonBlank = cells.filter((row) => row.some((c) => c.trim() !== ''));
+  let readAs: ImportReadAs = { delimiter, decimal: decimal ?? null };
   if (nonBlank.length === 0) {
-    return { storeys: [], errors: [{ row: 1, column: 'file', message: 'The file has no rows' }] };
+    return {
+      storeys: [],
+      errors: [{ row: 1, column: 'file', message: 'The file has no rows' }],
+      readAs,
+    };
   }
   const headerRow = cells.indexOf(nonBlank[0]);
   const headers = nonBlank[0].map(split);
@@ -114,13 +127,27 @@ export function parseStoreyTable(
     }
     at.set(column.key, index);
   }
-  if (errors.length > 0) return { storeys: [], errors };
+  if (errors.length > 0) return { storeys: [], errors, readAs };
 
+  const dataRows = cells.slice(headerRow + 1);
+  const numberAt = columns.filter((c) => c.key !== 'label').map((c) => at.get(c.key) as number);
+  readAs = readAsFor(
+    dataRows.flatMap((row) => numberAt.map((i) => row[i] ?? '')),
+    delimiter,
+    decimal,
+  );
   const storeys: ImportedStorey[] = [];
   cells.forEach((row, r) => {
     if (r <= headerRow || row.every((c) => c.trim() === '')) return;
     const rowNumber = r + 1;
     const values: ImportedStorey = { label: '', height: null, mass: null, stiffness: null };
+    const miscounted = cellCountProblem(row, cells[headerRow], delimiter);
+    if (miscounted) {
+      // Its cells are shifted: none of them can be trusted to be in its column.
+      errors.push({ row: rowNumber, column: 'row', message: miscounted });
+      storeys.push(values);
+      return;
+    }
     for (const column of columns) {
       const index = at.get(column.key);
       const text = index === undefined ? '' : (row[index] ?? '').trim();
@@ -135,7 +162,7 @@ export function parseStoreyTable(
         values.label = text.slice(0, 60);
         continue;
       }
-      const cell = numberCell(text, false);
+      const cell = numberCell(text, false, readAs.decimal);
       if ('problem' in cell) {
         errors.push({ row: rowNumber, column: column.header, message: cell.problem });
       } else {
@@ -158,5 +185,5 @@ export function parseStoreyTable(
       message: `At most ${ANALYSIS_LIMITS.maxStoreys} storeys can be analysed`,
     });
   }
-  return { storeys, errors };
+  return { storeys, errors, readAs };
 }

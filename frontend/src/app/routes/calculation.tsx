@@ -200,6 +200,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
               units={units}
               onChange={inputs.setRows}
               readOnly={!editable}
+              flags={resultsMatchStoreys && !dirty ? result.plausibility : undefined}
             />
             <AnalysisSettings inputs={inputs} readOnly={!editable} />
           </Section>

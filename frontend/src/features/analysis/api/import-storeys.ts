@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import type { DisplayUnits, StoreyImportResponse } from '@tiermode/shared-types';
+import type { DecimalMark, DisplayUnits, StoreyImportResponse } from '@tiermode/shared-types';
 import { AxiosError } from 'axios';
 import { api } from '@/lib/api-client';
 
@@ -8,9 +8,19 @@ export type ImportOutcome = StoreyImportResponse & { messages: string[] };
 
 export function useImportStoreys(onProgress: (fraction: number) => void) {
   return useMutation({
-    mutationFn: async ({ file, units }: { file: File; units: DisplayUnits }) => {
+    mutationFn: async ({
+      file,
+      units,
+      decimal,
+    }: {
+      file: File;
+      units: DisplayUnits;
+      /** Unset: as the file's cells settle it. */
+      decimal?: DecimalMark;
+    }) => {
       const form = new FormData();
       form.append('units', units);
+      if (decimal) form.append('decimal', decimal);
       form.append('file', file);
       try {
         const { data } = await api.post<StoreyImportResponse>('/imports/storeys', form, {
@@ -24,6 +34,7 @@ export function useImportStoreys(onProgress: (fraction: number) => void) {
           return {
             storeys: refused.storeys ?? [],
             errors: refused.errors ?? [],
+            readAs: refused.readAs ?? { delimiter: null, decimal: null },
             messages: refused.message ?? [],
           } satisfies ImportOutcome;
         }

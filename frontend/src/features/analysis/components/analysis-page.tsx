@@ -41,7 +41,14 @@ export function AnalysisPage() {
       <CautionBanner />
 
       <Section title="Storey table">
-        <StoreyTable rows={inputs.rows} units={units} onChange={inputs.setRows} />
+        <StoreyTable
+          rows={inputs.rows}
+          units={units}
+          onChange={inputs.setRows}
+          flags={
+            result?.modes[0]?.shape.length === inputs.rows.length ? result.plausibility : undefined
+          }
+        />
         <AnalysisSettings inputs={inputs} />
       </Section>
 

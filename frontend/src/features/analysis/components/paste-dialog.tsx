@@ -10,8 +10,9 @@ import {
 } from '@mui/material';
 import { useState } from 'react';
 import { massHeader, unitLabel, type UnitSystem } from '@/lib/units';
-import { parseStoreyBlock } from '../model/paste';
+import { parseStoreyBlock, type ReadOptions } from '../model/paste';
 import type { StoreyRow } from '../model/storey-rows';
+import { ReadAsControls } from './read-as-controls';
 
 interface PasteDialogProps {
   units: UnitSystem;
@@ -22,7 +23,8 @@ interface PasteDialogProps {
 /** Paste a block of storeys copied from a spreadsheet; rows that cannot be read are named. */
 export function PasteDialog({ units, onClose, onApply }: PasteDialogProps) {
   const [text, setText] = useState('');
-  const parsed = text.trim() ? parseStoreyBlock(text, units) : null;
+  const [options, setOptions] = useState<ReadOptions>({});
+  const parsed = text.trim() ? parseStoreyBlock(text, units, options) : null;
   const columns = `label (optional), height (${unitLabel(units, 'length')}), ${massHeader(units).toLowerCase()}, stiffness (${unitLabel(units, 'stiffness')})`;
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="md" aria-labelledby="paste-title">
@@ -41,6 +43,9 @@ export function PasteDialog({ units, onClose, onApply }: PasteDialogProps) {
           onChange={(e) => setText(e.target.value)}
           slotProps={{ htmlInput: { style: { fontFamily: 'monospace' } } }}
         />
+        {parsed && (
+          <ReadAsControls readAs={parsed.readAs} options={options} onChange={setOptions} />
+        )}
         {parsed && (
           <Alert
             severity={parsed.errors.length ? 'warning' : 'success'}

@@ -3,10 +3,19 @@ import ContentPasteIcon from '@mui/icons-material/ContentPaste';
 import UploadFileIcon from '@mui/icons-material/UploadFile';
 import CalculateIcon from '@mui/icons-material/Calculate';
 import DeleteIcon from '@mui/icons-material/Delete';
+import ContentCopyIcon from '@mui/icons-material/ContentCopy';
+import ReportIcon from '@mui/icons-material/Report';
 import VerticalAlignBottomIcon from '@mui/icons-material/VerticalAlignBottom';
-import { Alert, Box, Button, Stack, Typography } from '@mui/material';
-import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid';
-import { useState } from 'react';
+import { Alert, Box, Button, Stack, Tooltip, Typography } from '@mui/material';
+import {
+  DataGrid,
+  GridActionsCellItem,
+  gridFocusCellSelector,
+  useGridApiRef,
+  type GridColDef,
+} from '@mui/x-data-grid';
+import type { PlausibilityFlag } from '@tiermode/shared-types';
+import { useState, type ClipboardEvent } from 'react';
 import {
   fromDisplay,
   massHeader,
@@ -15,6 +24,7 @@ import {
   type Quantity,
   type UnitSystem,
 } from '@/lib/units';
+import { pasteIntoTable, storeyBlockText, type StoreyField } from '../model/paste';
 import { newRowId, storeyProblems, type StoreyRow } from '../model/storey-rows';
 import { ColumnStiffnessDialog } from './column-stiffness-dialog';
 import { PasteDialog } from './paste-dialog';
@@ -26,6 +36,8 @@ interface StoreyTableProps {
   onChange: (rows: StoreyRow[]) => void;
   /** Shown, not edited: a locked or submitted calc, or one the reader may not change. */
   readOnly?: boolean;
+  /** Implausible results of the last analysis, each marked on its storey's row. */
+  flags?: PlausibilityFlag[];
 }
 
 type DisplayRow = StoreyRow & { number: number };
@@ -34,8 +46,17 @@ const toNumber = (value: unknown) =>
   typeof value === 'number' ? value : value === null || value === '' ? Number.NaN : Number(value);
 
 /** The storey table: storey 1 (at the base) first; values shown in the chosen units. */
-export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyTableProps) {
+export function StoreyTable({
+  rows,
+  units,
+  onChange,
+  readOnly = false,
+  flags = [],
+}: StoreyTableProps) {
+  const apiRef = useGridApiRef();
   const [pasting, setPasting] = useState(false);
+  const [gridPaste, setGridPaste] = useState<{ ok: boolean; message: string } | null>(null);
+  const flagged = new Map(flags.map((f) => [f.storey, f.message]));
   const [uploading, setUploading] = useState(false);
   const [columnsFor, setColumnsFor] = useState<number | null>(null);
   const problems = storeyProblems(rows);
@@ -72,8 +93,72 @@ export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyT
     onChange([...rows.slice(0, index), copy, ...rows.slice(index)]);
   };
 
+  const headings = [
+    'Label',
+    `Height (${unitLabel(units, 'length')})`,
+    massHeader(units),
+    `Stiffness (${unitLabel(units, 'stiffness')})`,
+  ];
+  const copyTable = () => {
+    const text = storeyBlockText(rows, headings, (field, value) =>
+      toDisplay(units, field === 'height' ? 'length' : field, value),
+    );
+    void navigator.clipboard
+      ?.writeText(text)
+      .then(() =>
+        setGridPaste({
+          ok: true,
+          message: `Copied ${rows.length} storey(s), every digit, with headings.`,
+        }),
+      )
+      .catch(() =>
+        setGridPaste({ ok: false, message: 'The browser did not allow copying to the clipboard.' }),
+      );
+  };
+  // Ctrl+V on a selected cell (the grid's own clipboard paste is not in its free edition).
+  const onPaste = (event: ClipboardEvent<HTMLDivElement>) => {
+    if (readOnly) return;
+    const target = event.target as HTMLElement;
+    if (target.closest('input, textarea')) return; // a cell being edited takes the text itself
+    const focus = gridFocusCellSelector(apiRef);
+    const field = focus?.field as StoreyField | undefined;
+    if (!focus || !field || !['label', 'height', 'mass', 'stiffness'].includes(field)) return;
+    const index = rows.findIndex((r) => r.id === focus.id);
+    const text = event.clipboardData.getData('text/plain');
+    if (index < 0 || !text.trim()) return;
+    event.preventDefault();
+    const pasted = pasteIntoTable(rows, text, { index, field }, units);
+    if (pasted.rows) {
+      onChange(pasted.rows);
+      setGridPaste({ ok: true, message: `Pasted from storey ${index + 1}, ${field}.` });
+    } else {
+      setGridPaste({ ok: false, message: `Nothing was pasted. ${pasted.errors.join(' ')}` });
+    }
+  };
+
   const dataColumns: GridColDef<DisplayRow>[] = [
-    { field: 'number', headerName: 'Storey', width: 80, type: 'number', sortable: false },
+    {
+      field: 'number',
+      headerName: 'Storey',
+      width: 80,
+      type: 'number',
+      sortable: false,
+      renderCell: ({ row }) =>
+        flagged.has(row.number) ? (
+          <Tooltip title={flagged.get(row.number)}>
+            <Box
+              component="span"
+              sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, color: 'error.main' }}
+              aria-label={`Storey ${row.number}: ${flagged.get(row.number)}`}
+            >
+              <ReportIcon fontSize="small" />
+              {row.number}
+            </Box>
+          </Tooltip>
+        ) : (
+          row.number
+        ),
+    },
     {
       field: 'label',
       headerName: 'Label',
@@ -129,15 +214,23 @@ export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyT
           <Button startIcon={<UploadFileIcon />} onClick={() => setUploading(true)}>
             Upload a CSV or XLSX file
           </Button>
+          <Button startIcon={<ContentCopyIcon />} onClick={copyTable}>
+            Copy the table
+          </Button>
         </Stack>
       )}
       <Box
+        onPaste={onPaste}
         sx={{
           height: Math.min(460, 110 + rows.length * 52),
           '& .cell-invalid': { bgcolor: 'error.light', color: 'error.contrastText' },
+          '& .row-flagged': { boxShadow: (t) => `inset 4px 0 0 ${t.palette.error.main}` },
         }}
       >
         <DataGrid
+          apiRef={apiRef}
+          ignoreValueFormatterDuringExport
+          getRowClassName={({ row }) => (flagged.has(row.number) ? 'row-flagged' : '')}
           aria-label="Storey table"
           rows={rows.map((row, i) => ({ ...row, number: i + 1 }))}
           columns={columns}
@@ -157,9 +250,19 @@ export function StoreyTable({ rows, units, onChange, readOnly = false }: StoreyT
           }}
         />
       </Box>
+      {gridPaste && (
+        <Alert
+          severity={gridPaste.ok ? 'success' : 'error'}
+          role={gridPaste.ok ? 'status' : 'alert'}
+          onClose={() => setGridPaste(null)}
+        >
+          {gridPaste.message}
+        </Alert>
+      )}
       <Typography variant="caption" color="text.secondary">
         Storey 1 is at the base and the roof is the last row. Each storey's mass is lumped at the
-        floor on top of it; its height and stiffness are those of the storey below that floor.
+        floor on top of it; its height and stiffness are those of the storey below that floor. To
+        paste cells from a spreadsheet straight in, select a cell and press Ctrl+V.
       </Typography>
       {problems.length > 0 && (
         <Alert severity="error" role="alert" aria-label="Storey table problems">

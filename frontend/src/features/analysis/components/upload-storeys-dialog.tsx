@@ -14,7 +14,13 @@ import {
   Typography,
 } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
-import type { DisplayUnits, ImportedStorey } from '@tiermode/shared-types';
+import {
+  DECIMAL_MARK_WORDS,
+  DELIMITER_WORDS,
+  type DecimalMark,
+  type DisplayUnits,
+  type ImportedStorey,
+} from '@tiermode/shared-types';
 import { useState } from 'react';
 import { FileDrop } from '@/components/feedback/file-drop';
 import { errorMessages } from '@/lib/api-client';
@@ -49,6 +55,13 @@ export function UploadStoreysDialog({
 }) {
   const [units, setUnits] = useState<DisplayUnits>(initialUnits);
   const [progress, setProgress] = useState(0);
+  const [decimal, setDecimal] = useState<DecimalMark | 'found'>('found');
+  const [lastFile, setLastFile] = useState<File | null>(null);
+  const send = (file: File, mark: DecimalMark | 'found') => {
+    setProgress(0);
+    setLastFile(file);
+    upload.mutate({ file, units, decimal: mark === 'found' ? undefined : mark });
+  };
   const upload = useImportStoreys(setProgress);
   const outcome = upload.data;
   const cell = (quantity: Quantity, value: number | null) =>
@@ -107,6 +120,22 @@ export function UploadStoreysDialog({
               <MenuItem value="SI">SI: m, t, kN/m</MenuItem>
               <MenuItem value="US">US: ft, kip of seismic weight, kip/in</MenuItem>
             </TextField>
+            <TextField
+              select
+              size="small"
+              label="Numbers in the file"
+              value={decimal}
+              onChange={(e) => {
+                const mark = e.target.value as DecimalMark | 'found';
+                setDecimal(mark);
+                if (lastFile) send(lastFile, mark);
+              }}
+              sx={{ minWidth: 240 }}
+            >
+              <MenuItem value="found">As found in the file</MenuItem>
+              <MenuItem value="point">{DECIMAL_MARK_WORDS.point}</MenuItem>
+              <MenuItem value="comma">{DECIMAL_MARK_WORDS.comma}</MenuItem>
+            </TextField>
             <Typography variant="body2">
               Templates:{' '}
               <Link component="button" type="button" onClick={() => void download('xlsx', units)}>
@@ -125,10 +154,7 @@ export function UploadStoreysDialog({
             icon={<UploadFileIcon />}
             uploading={upload.isPending}
             progress={progress}
-            onFile={(file) => {
-              setProgress(0);
-              upload.mutate({ file, units });
-            }}
+            onFile={(file) => send(file, decimal)}
           >
             Drop a CSV or XLSX file here, or click to choose one (at most 2 MB). Storey 1, at the
             base, is the first row under the headers.
@@ -142,6 +168,18 @@ export function UploadStoreysDialog({
                 <div key={m}>{m}</div>
               ))}
             </Alert>
+          )}
+          {outcome?.readAs && (
+            <Typography data-testid="read-as">
+              Read as:{' '}
+              {outcome.readAs.delimiter
+                ? `columns separated by ${DELIMITER_WORDS[outcome.readAs.delimiter]}, `
+                : 'a workbook, '}
+              {outcome.readAs.decimal
+                ? DECIMAL_MARK_WORDS[outcome.readAs.decimal]
+                : 'decimal mark not settled by any cell'}
+              .
+            </Typography>
           )}
           {outcome && outcome.storeys.length > 0 && (
             <>
