@@ -253,7 +253,8 @@ describe('GET /api/verification', () => {
       .get('/api/verification')
       .set('Authorization', `Bearer ${token}`)
       .expect(200);
-    expect(res.body.length).toBeGreaterThanOrEqual(5);
+    // Issue 13: the page is the engine's public test record, at least 25 published cases.
+    expect(res.body.length).toBeGreaterThanOrEqual(25);
     for (const reference of res.body) {
       expect(reference.pass).toBe(true);
       expect(reference.source).toEqual(expect.any(String));

@@ -1,8 +1,9 @@
-import { correlationCoefficient } from '../analysis/engine/combination';
+import { correlationMatrix } from '../analysis/engine/combination';
 import { analyse } from '../analysis/engine/analyse';
 import { STANDARD_GRAVITY } from '../analysis/engine/modal-response';
 import { naturalModes } from '../analysis/engine/modes';
 import type { Storey } from '../analysis/engine/shear-building';
+import { PUBLISHED_CASES } from './published-cases';
 
 /** A reference case: its source, its inputs in words, and the values to compare. */
 export interface ReferenceCase {
@@ -111,19 +112,15 @@ export const REFERENCE_CASES: ReferenceCase[] = [
       'Der Kiureghian, J. Eng. Mech. Div. ASCE 106 (1980); Wilson, Der Kiureghian & Bayo, Earthquake Eng. Struct. Dyn. 9 (1981) 187-194: the equal-damping formula, worked by hand',
     inputs: ['zeta = 0.05', 'beta = omega_j / omega_i = 0.9 and 0.5'],
     tolerance: 1e-4,
-    values: () => [
-      {
-        quantity: 'rho at beta = 0.9',
-        expected: 0.47303,
-        computed: correlationCoefficient(1, 0.9, 0.05),
-      },
-      {
-        quantity: 'rho at beta = 0.5',
-        expected: 0.018486,
-        computed: correlationCoefficient(1, 0.5, 0.05),
-      },
-      { quantity: 'rho at beta = 1', expected: 1, computed: correlationCoefficient(1, 1, 0.05) },
-    ],
+    // The matrix the analysis builds from its modes' frequencies (analyse -> correlationMatrix).
+    values: () => {
+      const rho = correlationMatrix([1, 0.9, 0.5], 0.05);
+      return [
+        { quantity: 'rho at beta = 0.9', expected: 0.47303, computed: rho[0][1] },
+        { quantity: 'rho at beta = 0.5', expected: 0.018486, computed: rho[0][2] },
+        { quantity: 'rho at beta = 1', expected: 1, computed: rho[1][1] },
+      ];
+    },
   },
   {
     id: 'single-storey',
@@ -156,4 +153,5 @@ export const REFERENCE_CASES: ReferenceCase[] = [
       ];
     },
   },
+  ...PUBLISHED_CASES,
 ];

@@ -1,64 +1,17 @@
-import Decimal from 'decimal.js';
 import { analyse } from '../analyse';
 import { naturalModes } from '../modes';
 import type { Storey } from '../shear-building';
 import { seededRandom, uniformBuilding } from './buildings';
+import { referenceOmega } from '../../../verification/sturm-reference';
 
-/**
- * Ill-conditioned buildings against a 60-digit reference.
- *
- * The reference is independent of the engine's route: it bisects on K - lambda M itself in
- * 60-digit decimal arithmetic, counting eigenvalues below lambda by the Sturm sequence property
- * (the negative pivots of the LDL^T factors of K - lambda M number the eigenvalues below lambda:
- * Bathe, Finite Element Procedures, 1996, the Sturm sequence property in the chapter preparing
- * the solution of eigenproblems; Wilkinson, The Algebraic Eigenvalue Problem, 1965, chapter 5).
- * At 60 digits no rounding in it reaches the 1e-9 the engine is held to.
- */
-const D = Decimal.clone({ precision: 60 });
-type Dec = InstanceType<typeof D>;
-
-function eigenvaluesBelow(storeys: readonly Storey[], lambda: Dec): number {
-  const n = storeys.length;
-  let negative = 0;
-  let previous: Dec | null = null;
-  for (let i = 0; i < n; i += 1) {
-    const below = new D(storeys[i].stiffness);
-    const above = i + 1 < n ? new D(storeys[i + 1].stiffness) : new D(0);
-    let pivot = below.plus(above).minus(lambda.times(storeys[i].mass));
-    if (previous !== null) pivot = pivot.minus(below.times(below).dividedBy(previous));
-    if (pivot.isZero()) pivot = new D('-1e-55').times(lambda);
-    if (pivot.isNegative()) negative += 1;
-    previous = pivot;
-  }
-  return negative;
-}
-
-/** omega_j^2 (j 0-based) to about 1e-25 relative, bracketed from the engine's value. */
-function referenceOmegaSquared(storeys: readonly Storey[], j: number, estimate: number): Dec {
-  let width = new D('1e-6');
-  let lo: Dec;
-  let hi: Dec;
-  for (;;) {
-    lo = new D(estimate).times(new D(1).minus(width));
-    hi = new D(estimate).times(new D(1).plus(width));
-    if (eigenvaluesBelow(storeys, lo) <= j && eigenvaluesBelow(storeys, hi) > j) break;
-    width = width.times(100);
-    if (width.greaterThan(0.5)) throw new Error(`no bracket for mode ${j + 1}`);
-  }
-  while (hi.minus(lo).dividedBy(lo).greaterThan('1e-25')) {
-    const mid = lo.plus(hi).dividedBy(2);
-    if (eigenvaluesBelow(storeys, mid) > j) hi = mid;
-    else lo = mid;
-  }
-  return lo.plus(hi).dividedBy(2);
-}
+// The reference (referenceOmega) is independent of the engine's route: 60-digit Sturm bisection
+// on K - lambda M itself (verification/sturm-reference.ts, where its sources are named).
 
 function expectPeriodsToMatch(storeys: readonly Storey[], which?: number[]): void {
   const modes = naturalModes(storeys);
   for (const j of which ?? modes.map((_, index) => index)) {
     const omega = modes[j].circularFrequency;
-    const reference = referenceOmegaSquared(storeys, j, omega * omega).sqrt();
-    const error = new D(omega).minus(reference).abs().dividedBy(reference).toNumber();
+    const error = Math.abs(omega - referenceOmega(storeys, j, omega)) / omega;
     // 1e-9 is the promise (issue 13); the bidiagonal bisection gives about 1e-15.
     if (!(error < 1e-9)) throw new Error(`mode ${j + 1}: relative error ${error}`);
     expect(error).toBeLessThan(1e-9);
