@@ -104,6 +104,12 @@ describe('The analysis page (designer)', () => {
     await implausible.waitFor();
     expect(await implausible.textContent()).toMatch(/Storey 2 is the most flexible/);
     expect(await implausible.textContent()).toMatch(/Storey 2 drifts \d+% of its height/);
+    // The storey table marks the row of the storey to look at.
+    await page
+      .getByRole('grid', { name: 'Storey table' })
+      .getByLabel(/^Storey 2: /)
+      .first()
+      .waitFor();
     await screenshot(page, 'analysis-implausible');
     await editCell(page, 'L2', 'stiffness', '480000');
     await implausible.waitFor({ state: 'detached' });
@@ -157,6 +163,69 @@ describe('The analysis page (designer)', () => {
     const roofSi = storeyRow(page, 'Roof');
     expect(await roofSi.locator('[data-field="mass"]').textContent()).toBe('260');
     expect(await roofSi.locator('[data-field="stiffness"]').textContent()).toBe('320,000');
+    await close();
+  });
+
+  it('reads pasted numbers as the person wrote them, says how, and pastes into the grid', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'designer');
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Quick analysis' })
+      .click();
+    await page.getByRole('table', { name: 'Modes' }).waitFor();
+    await waitForResults(page);
+
+    // A European block: semicolons and decimal commas, thousands grouped with points.
+    await page.getByRole('button', { name: 'Paste from a spreadsheet' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Paste storeys from a spreadsheet' });
+    await dialog
+      .getByLabel('Pasted cells')
+      .fill('Niveau 1;4,5;640;780.000,5\nNiveau 2;3,5;620;700000\nToit;3,5;400;500000');
+    expect(await dialog.getByTestId('read-as').textContent()).toBe(
+      'Read as: columns separated by semicolons, decimal comma (1.234,5).',
+    );
+    expect(await dialog.getByRole('status').textContent()).toContain('3 storey(s) read.');
+    await screenshot(page, 'paste-read-as');
+    // A comma-separated row split by a thousands separator is refused, naming the row.
+    await dialog.getByLabel('Pasted cells').fill('L1,4.5,640,780000\nL2,3.5,1,020,700000');
+    expect(await dialog.getByRole('status').textContent()).toContain(
+      'Row 2: 5 cells where the first row has 4',
+    );
+    // A cell nothing settles is refused until the person says how to read it.
+    await dialog.getByLabel('Pasted cells').fill('L1\t4\t640\t780,000');
+    expect(await dialog.getByRole('status').textContent()).toContain(
+      'Row 1, stiffness: "780,000" reads as 780000 with a decimal point or 780 with a decimal comma',
+    );
+    await dialog.getByLabel('Numbers').click();
+    await page.getByRole('option', { name: 'decimal point (1,234.5)' }).click();
+    expect(await dialog.getByRole('status').textContent()).toContain('1 storey(s) read.');
+    await screenshot(page, 'paste-ambiguous-chosen');
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+
+    // Ctrl+V on a selected cell: two storeys' mass and stiffness from storey 2's mass cell. The
+    // thousands separators are the grid's own (it shows 780,000), so they read as the grid does.
+    const grid = page.getByRole('grid', { name: 'Storey table' });
+    const massCell = grid.locator('[data-rowindex="1"] [data-field="mass"]');
+    await massCell.click();
+    await page.evaluate(() => {
+      const data = new DataTransfer();
+      data.setData('text/plain', '410\t555,000\n390\t444,000');
+      document.activeElement?.dispatchEvent(
+        new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }),
+      );
+    });
+    await page
+      .getByText(
+        'Pasted from storey 2, mass, read as decimal point (1,234.5), as the grid shows numbers.',
+      )
+      .waitFor();
+    expect(await massCell.textContent()).toBe('410');
+    expect(await grid.locator('[data-rowindex="2"] [data-field="stiffness"]').textContent()).toBe(
+      '444,000',
+    );
+    await waitForResults(page);
+    await screenshot(page, 'grid-paste');
     await close();
   });
 

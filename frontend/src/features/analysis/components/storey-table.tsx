@@ -14,7 +14,11 @@ import {
   useGridApiRef,
   type GridColDef,
 } from '@mui/x-data-grid';
-import type { PlausibilityFlag } from '@tiermode/shared-types';
+import {
+  DECIMAL_MARK_WORDS,
+  detectDecimalMark,
+  type PlausibilityFlag,
+} from '@tiermode/shared-types';
 import { useState, type ClipboardEvent } from 'react';
 import {
   fromDisplay,
@@ -24,7 +28,12 @@ import {
   type Quantity,
   type UnitSystem,
 } from '@/lib/units';
-import { pasteIntoTable, storeyBlockText, type StoreyField } from '../model/paste';
+import {
+  localeDecimalMark,
+  pasteIntoTable,
+  storeyBlockText,
+  type StoreyField,
+} from '../model/paste';
 import { newRowId, storeyProblems, type StoreyRow } from '../model/storey-rows';
 import { ColumnStiffnessDialog } from './column-stiffness-dialog';
 import { PasteDialog } from './paste-dialog';
@@ -127,10 +136,17 @@ export function StoreyTable({
     const text = event.clipboardData.getData('text/plain');
     if (index < 0 || !text.trim()) return;
     event.preventDefault();
-    const pasted = pasteIntoTable(rows, text, { index, field }, units);
+    const fallbackDecimal = localeDecimalMark();
+    const pasted = pasteIntoTable(rows, text, { index, field }, units, { fallbackDecimal });
     if (pasted.rows) {
       onChange(pasted.rows);
-      setGridPaste({ ok: true, message: `Pasted from storey ${index + 1}, ${field}.` });
+      const mark = pasted.readAs.decimal;
+      setGridPaste({
+        ok: true,
+        message: `Pasted from storey ${index + 1}, ${field}${
+          mark ? `, read as ${DECIMAL_MARK_WORDS[mark]}` : ''
+        }${mark && detectDecimalMark([text]) === null ? ', as the grid shows numbers' : ''}.`,
+      });
     } else {
       setGridPaste({ ok: false, message: `Nothing was pasted. ${pasted.errors.join(' ')}` });
     }

@@ -22,6 +22,16 @@ export interface ReadAs {
 export interface ReadOptions {
   delimiter?: Delimiter;
   decimal?: DecimalMark;
+  /**
+   * The mark to use where no cell settles it. The storey grid passes its own (the browser's
+   * locale, which formats its numbers), so cells copied from it read back as they were shown.
+   */
+  fallbackDecimal?: DecimalMark;
+}
+
+/** The decimal mark the browser's locale writes, which the grids use to show numbers. */
+export function localeDecimalMark(): DecimalMark {
+  return (1.5).toLocaleString().includes(',') ? 'comma' : 'point';
 }
 
 export interface PasteResult {
@@ -180,7 +190,8 @@ export function pasteIntoTable(
   const numberCells = lines.flatMap(({ cells }) =>
     cells.filter((_, i) => fieldAt(i) !== undefined && fieldAt(i) !== 'label'),
   );
-  const decimal = options.decimal ?? detectDecimalMark(numberCells);
+  const decimal =
+    options.decimal ?? detectDecimalMark(numberCells) ?? options.fallbackDecimal ?? null;
   const readAs: ReadAs = { delimiter, decimal };
   const names: Record<StoreyField, string> = {
     label: 'label',
