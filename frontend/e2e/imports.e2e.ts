@@ -100,15 +100,26 @@ describe('Uploading a storey table (designer)', () => {
     await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').nth(3).waitFor();
     await screenshot(page, 'imports-fixed-and-analysed');
 
-    // A spectrum kept as a CSV of period and Sa (invented values) replaces the points.
+    // A spectrum kept as a European CSV of period and Sa (invented values, semicolons and
+    // decimal commas) replaces the points, read as it was written, and says so.
     await page.getByLabel('Spectrum file').setInputFiles({
       name: 'spectrum.csv',
       mimeType: 'text/csv',
-      buffer: Buffer.from('Period (s),Sa (g)\n0,0.3\n0.2,0.9\n0.8,0.9\n5,0.1\n'),
+      buffer: Buffer.from('Period (s);Sa (g)\n0;0,3\n0,2;0,9\n0,8;0,9\n5;0,1\n'),
     });
     await expect
       .poll(() => page.getByRole('grid', { name: 'Spectrum points' }).getByRole('row').count())
       .toBe(5);
+    expect(await page.getByTestId('spectrum-read-as').textContent()).toBe(
+      'Read as: columns separated by semicolons, decimal comma (1.234,5).',
+    );
+    expect(
+      await page
+        .getByRole('grid', { name: 'Spectrum points' })
+        .getByRole('row')
+        .nth(2)
+        .textContent(),
+    ).toContain('0.2');
     await close();
   });
 

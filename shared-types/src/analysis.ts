@@ -217,8 +217,7 @@ export type SpectrumGeneratorParameters = Omit<SpectrumGenerateRequest, 'kind'>;
 
 /** `inputs.spectrum.source`. */
 export type SpectrumSource =
-  | { kind: 'user' }
-  | { kind: SpectrumGeneratorKind; parameters: SpectrumGeneratorParameters };
+  { kind: 'user' } | { kind: SpectrumGeneratorKind; parameters: SpectrumGeneratorParameters };
 
 /** `POST /api/analysis/column-stiffness`: a storey's lateral stiffness from its columns. */
 export type ColumnFixity = 'fixed-fixed' | 'fixed-pinned';

@@ -1,7 +1,12 @@
 import UploadFileIcon from '@mui/icons-material/UploadFile';
-import { Alert, Button, Stack } from '@mui/material';
-import type { SpectrumPointInput } from '@tiermode/shared-types';
-import { useRef } from 'react';
+import { Alert, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import {
+  DECIMAL_MARK_WORDS,
+  DELIMITER_WORDS,
+  type DecimalMark,
+  type SpectrumPointInput,
+} from '@tiermode/shared-types';
+import { useRef, useState } from 'react';
 import { errorMessages } from '@/lib/api-client';
 import { useImportSpectrum } from '../api/import-spectrum';
 
@@ -9,8 +14,21 @@ import { useImportSpectrum } from '../api/import-spectrum';
 export function SpectrumUpload({ onPoints }: { onPoints: (points: SpectrumPointInput[]) => void }) {
   const input = useRef<HTMLInputElement>(null);
   const upload = useImportSpectrum();
+  const [decimal, setDecimal] = useState<DecimalMark | 'found'>('found');
+  const readAs = upload.data?.readAs;
   return (
     <Stack spacing={1}>
+      <TextField
+        select
+        size="small"
+        label="Numbers in the file"
+        value={decimal}
+        onChange={(e) => setDecimal(e.target.value as DecimalMark | 'found')}
+      >
+        <MenuItem value="found">As found in the file</MenuItem>
+        <MenuItem value="point">{DECIMAL_MARK_WORDS.point}</MenuItem>
+        <MenuItem value="comma">{DECIMAL_MARK_WORDS.comma}</MenuItem>
+      </TextField>
       <Button startIcon={<UploadFileIcon />} onClick={() => input.current?.click()}>
         Upload points (CSV)
       </Button>
@@ -23,9 +41,23 @@ export function SpectrumUpload({ onPoints }: { onPoints: (points: SpectrumPointI
         onChange={(e) => {
           const file = e.target.files?.[0];
           e.target.value = '';
-          if (file) upload.mutate(file, { onSuccess: ({ points }) => onPoints(points) });
+          if (file) {
+            upload.mutate(
+              { file, decimal: decimal === 'found' ? undefined : decimal },
+              { onSuccess: ({ points }) => onPoints(points) },
+            );
+          }
         }}
       />
+      {readAs && upload.isSuccess && (
+        <Typography variant="caption" data-testid="spectrum-read-as">
+          Read as:{' '}
+          {readAs.delimiter
+            ? `columns separated by ${DELIMITER_WORDS[readAs.delimiter]}, `
+            : 'a workbook, '}
+          {readAs.decimal ? DECIMAL_MARK_WORDS[readAs.decimal] : 'no decimal mark needed'}.
+        </Typography>
+      )}
       {upload.isError && (
         <Alert severity="error" role="alert" aria-label="Spectrum file problems">
           {errorMessages(upload.error).map((m) => (
