@@ -161,3 +161,28 @@ describe('pasteIntoTable', () => {
     ]);
   });
 });
+
+describe('"Copy the table" pasted back into the grid', () => {
+  it('skips the headings line and lands every value where it came from', () => {
+    const table = [
+      { id: 'a', label: 'L1', height: 4.35, mass: 723_012_267.1234567, stiffness: 1 / 3 },
+      { id: 'b', label: 'Roof', height: 3.1, mass: 2.5e5, stiffness: 7.89e11 },
+    ];
+    const text = storeyBlockText(
+      table,
+      ['Label', 'Height (m)', 'Mass (t)', 'Stiffness (kN/m)'],
+      (f, v) => toDisplay('SI', f === 'height' ? 'length' : f, v),
+    );
+    const blank = table.map((r) => ({ ...r, label: '', height: 1, mass: 1, stiffness: 1 }));
+    const { rows, errors } = pasteIntoTable(blank, text, { index: 0, field: 'label' }, 'SI');
+    expect(errors).toEqual([]);
+    rows!.forEach((row, i) => {
+      expect(row.label).toBe(table[i].label);
+      for (const field of ['height', 'mass', 'stiffness'] as const) {
+        expect(Math.abs(row[field] - table[i][field])).toBeLessThanOrEqual(
+          2 * Number.EPSILON * Math.abs(table[i][field]),
+        );
+      }
+    });
+  });
+});

@@ -43,6 +43,34 @@ export interface PasteResult {
 
 export type StoreyField = 'label' | 'height' | 'mass' | 'stiffness';
 const NUMBER_FIELDS = ['height', 'mass', 'stiffness'] as const;
+type NumberField = (typeof NUMBER_FIELDS)[number];
+
+const COMMA_IN_A_NUMBER =
+  'a comma inside a number (a thousands separator or a decimal comma)? Separate the columns with tabs or semicolons';
+
+/** The columns as the storey grid names them in these units. */
+function fieldNames(system: UnitSystem): Record<StoreyField, string> {
+  return {
+    label: 'label',
+    height: 'height',
+    mass: system === 'US' ? 'weight' : 'mass',
+    stiffness: 'stiffness',
+  };
+}
+
+/** One storey value in SI from a cell in the units shown, or why not ("mass: ..."). */
+function readStoreyValue(
+  field: NumberField,
+  cell: string,
+  decimal: DecimalMark | null,
+  system: UnitSystem,
+): { value: number } | { problem: string } {
+  const name = fieldNames(system)[field];
+  const read = numberUnder(cell, decimal);
+  if ('problem' in read) return { problem: `${name}: ${read.problem}` };
+  if (!(read.value > 0)) return { problem: `${name}: ${cell} must be more than 0` };
+  return { value: fromDisplay(system, field === 'height' ? 'length' : field, read.value) };
+}
 
 /** The text cut into lines of cells, with the delimiter used and the lines' numbers. */
 export function splitBlock(
@@ -88,12 +116,7 @@ export function parseStoreyBlock(
   const { lines, delimiter } = splitBlock(text, options.delimiter);
   const rows: StoreyRow[] = [];
   const errors: string[] = [];
-  const names: Record<StoreyField, string> = {
-    label: 'label',
-    height: 'height',
-    mass: system === 'US' ? 'weight' : 'mass',
-    stiffness: 'stiffness',
-  };
+  const names = fieldNames(system);
   const first = lines[0];
   const numbersIn = (cells: string[]) => cells.slice(cells.length >= 4 ? 1 : 0);
   // The decimal mark from every cell that would hold a number.
@@ -110,9 +133,7 @@ export function parseStoreyBlock(
       rows,
       errors: [
         `Row ${first.number}: ${width} cell(s) separated by ${DELIMITER_WORDS[delimiter]}, where a storey has 3 or 4 (label, height, ${names.mass}, stiffness)${
-          width > 4 && delimiter === 'comma'
-            ? ': a comma inside a number (a thousands separator or a decimal comma)? Separate the columns with tabs or semicolons'
-            : ''
+          width > 4 && delimiter === 'comma' ? `: ${COMMA_IN_A_NUMBER}` : ''
         }`,
       ],
       readAs,
@@ -122,9 +143,7 @@ export function parseStoreyBlock(
     if (cells.length !== width) {
       errors.push(
         `Row ${number}: ${cells.length} cells where the ${headings ? 'headings have' : 'first row has'} ${width}: ${
-          delimiter === 'comma'
-            ? 'a comma inside a number (a thousands separator or a decimal comma)? Separate the columns with tabs or semicolons'
-            : 'check the separators in this row'
+          delimiter === 'comma' ? COMMA_IN_A_NUMBER : 'check the separators in this row'
         }`,
       );
       continue;
@@ -137,10 +156,9 @@ export function parseStoreyBlock(
         row.label = cell.slice(0, 60);
         return;
       }
-      const read = numberUnder(cell, decimal);
-      if ('problem' in read) problems.push(`${names[field]}: ${read.problem}`);
-      else if (!(read.value > 0)) problems.push(`${names[field]}: ${cell} must be more than 0`);
-      else row[field] = fromDisplay(system, field === 'height' ? 'length' : field, read.value);
+      const read = readStoreyValue(field, cell, decimal, system);
+      if ('problem' in read) problems.push(read.problem);
+      else row[field] = read.value;
     });
     if (problems.length > 0) errors.push(...problems.map((p) => `Row ${number}, ${p}`));
     else rows.push(row);
@@ -157,7 +175,7 @@ export function parseStoreyBlock(
 export function storeyBlockText(
   rows: readonly StoreyRow[],
   headings: readonly string[],
-  toShown: (field: (typeof NUMBER_FIELDS)[number], value: number) => number,
+  toShown: (field: NumberField, value: number) => number,
 ): string {
   const lines = rows.map((row) =>
     [
@@ -193,15 +211,16 @@ export function pasteIntoTable(
   const decimal =
     options.decimal ?? detectDecimalMark(numberCells) ?? options.fallbackDecimal ?? null;
   const readAs: ReadAs = { delimiter, decimal };
-  const names: Record<StoreyField, string> = {
-    label: 'label',
-    height: 'height',
-    mass: system === 'US' ? 'weight' : 'mass',
-    stiffness: 'stiffness',
-  };
+  const names = fieldNames(system);
   const errors: string[] = [];
   const result = rows.map((row) => ({ ...row }));
-  lines.forEach(({ number, cells }, k) => {
+  // A first line of headings (what "Copy the table" puts first) is skipped, as the dialog does.
+  const headings =
+    lines.length > 1 &&
+    lines[0].cells.every(
+      (cell, i) => fieldAt(i) === 'label' || decimalEvidence(cell) === 'neither',
+    );
+  (headings ? lines.slice(1) : lines).forEach(({ number, cells }, k) => {
     if (startColumn + cells.length > FIELD_ORDER.length) {
       errors.push(
         `Row ${number}: ${cells.length} cells from the ${names[at.field]} column run past the stiffness column`,
@@ -219,16 +238,9 @@ export function pasteIntoTable(
         result[index].label = cell.slice(0, 60);
         return;
       }
-      const read = numberUnder(cell, decimal);
-      if ('problem' in read) errors.push(`Row ${number}, ${names[field]}: ${read.problem}`);
-      else if (!(read.value > 0))
-        errors.push(`Row ${number}, ${names[field]}: ${cell} must be more than 0`);
-      else
-        result[index][field] = fromDisplay(
-          system,
-          field === 'height' ? 'length' : field,
-          read.value,
-        );
+      const read = readStoreyValue(field, cell, decimal, system);
+      if ('problem' in read) errors.push(`Row ${number}, ${read.problem}`);
+      else result[index][field] = read.value;
     });
   });
   return { rows: errors.length > 0 ? null : result, errors, readAs };
