@@ -198,3 +198,144 @@ describe('Checks stored with a saved calc', () => {
     ).toBe(false);
   });
 });
+
+describe('The code basis and the spectrum it is checked with', () => {
+  /** A generated spectrum as a calc's inputs hold it: points, interpolation and source. */
+  const generated = async (body: object) => {
+    const g = (
+      await http().post('/api/spectra/generate').set(as('designer')).send(body).expect(200)
+    ).body as { points: unknown[]; interpolation: string; source: object };
+    return { points: g.points, interpolation: g.interpolation, source: g.source };
+  };
+
+  it('says nothing when the basis has the values the spectrum was generated with', async () => {
+    const g = await generated({ kind: 'asce7-two-period', sds: 1.0, sd1: 0.6, tl: 8, s1: 0.6 });
+    expect(g.source).toEqual({
+      kind: 'asce7-two-period',
+      parameters: { sds: 1.0, sd1: 0.6, tl: 8, s1: 0.6 },
+    });
+    const body = (await checks(ASCE, { spectrum: g }).expect(200)).body as ChecksResponse;
+    expect(body.warnings).toEqual([]);
+  });
+
+  it('warns, naming both values, when the basis SDS is not the spectrum source SDS', async () => {
+    const g = await generated({ kind: 'asce7-two-period', sds: 1.2, sd1: 0.6, tl: 8 });
+    const body = (await checks(ASCE, { spectrum: g }).expect(200)).body as ChecksResponse;
+    expect(body.warnings).toEqual([
+      expect.stringContaining(
+        'The code basis has SDS 1 g but the design spectrum was generated with SDS 1.2 g',
+      ),
+    ]);
+  });
+
+  it('warns when the spectrum belongs to another code, or is EN 1998-1 elastic under the EN basis', async () => {
+    const en = await generated({
+      kind: 'en1998-design',
+      agR: 0.25,
+      groundType: 'C',
+      spectrumType: 1,
+      q: 3.9,
+    });
+    const mixed = (await checks(ASCE, { spectrum: en }).expect(200)).body as ChecksResponse;
+    expect(mixed.warnings?.[0]).toContain('the checks would mix two codes');
+    const agreed = (await checks(EN, { spectrum: en }).expect(200)).body as ChecksResponse;
+    expect(agreed.warnings).toEqual([]);
+    const elastic = await generated({
+      kind: 'en1998-elastic',
+      agR: 0.25,
+      groundType: 'C',
+      spectrumType: 1,
+    });
+    const body = (await checks(EN, { spectrum: elastic }).expect(200)).body as ChecksResponse;
+    expect(body.warnings).toEqual([
+      expect.stringContaining('the EN 1998-1 checks take the design spectrum with q (3.2.2.5)'),
+    ]);
+  });
+
+  it('reads ag as gamma_I agR (EN 1998-1 3.2.1(3)) when comparing', async () => {
+    const en = await generated({
+      kind: 'en1998-design',
+      agR: 0.25,
+      importanceFactor: 1.2,
+      groundType: 'C',
+      spectrumType: 1,
+      q: 3.9,
+    });
+    const same = (
+      await checks({ ...EN, ag: 0.3, importanceFactor: 1.2 }, { spectrum: en }).expect(200)
+    ).body as ChecksResponse;
+    expect(same.warnings).toEqual([]);
+    const differs = (await checks(EN, { spectrum: en }).expect(200)).body as ChecksResponse;
+    expect(differs.warnings).toEqual([
+      expect.stringContaining('has ag 0.25 g but the design spectrum was generated with ag 0.3 g'),
+      expect.stringContaining('has importance factor 1 but'),
+    ]);
+  });
+
+  it('refuses an S1 below zero in the generator and in a stored source', async () => {
+    const res = await http()
+      .post('/api/spectra/generate')
+      .set(as('designer'))
+      .send({ kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 8, s1: -0.1 })
+      .expect(400);
+    expect(res.body.message).toContain('s1 must be a number >= 0 (g)');
+    const stored = await http()
+      .post('/api/analysis')
+      .set(as('designer'))
+      .send({
+        ...sampleInputs(),
+        spectrum: {
+          ...sampleInputs().spectrum,
+          source: { kind: 'asce7-two-period', parameters: { sds: 1, sd1: 0.6, tl: 8, s1: -1 } },
+        },
+      })
+      .expect(400);
+    expect(JSON.stringify(stored.body.message)).toContain(
+      'parameters.s1 must be a number >= 0 (g)',
+    );
+  });
+});
+
+describe('Design storey values beside the elastic ones', () => {
+  it('ASCE 7-22: forces / (R/Ie) x the scale factor, displacements x Cd/Ie / (R/Ie) x the drift scale', async () => {
+    const body = (await checks(ASCE).expect(200)).body as ChecksResponse;
+    const analysis = (
+      await http().post('/api/analysis').set(as('designer')).send(sampleInputs()).expect(200)
+    ).body as AnalysisResponse;
+    const design = body.design!;
+    expect(design.analysisValues).toBe('elastic');
+    expect(design.combination).toBe('cqc');
+    // ASCE 7-22 12.9.1.2 and 12.9.1.4.1 with R = 8, Ie = 1 (the basis of this test).
+    expect(design.forceFactor).toBeCloseTo(body.scaleFactor / 8, 14);
+    // 12.8.6 and 12.9.1.2: Cd / Ie = 5.5 over R / Ie = 8.
+    expect(design.displacementFactor).toBeCloseTo((5.5 / 8) * body.driftScaleFactor, 14);
+    design.storeyShear.forEach((v, i) => {
+      expect(v).toBeCloseTo((analysis.combined.cqc.storeyShear[i] / 8) * body.scaleFactor, 6);
+      // The same design shear as the storey checks use.
+      expect(v).toBeCloseTo(body.storeys[i].scaledShear, 6);
+    });
+    const h = sampleInputs().storeys.map((s) => s.height);
+    design.drift.forEach((d, i) =>
+      expect(d / h[i]).toBeCloseTo(body.storeys[i].designDriftRatio, 12),
+    );
+    expect(design.floorForce).toHaveLength(3);
+    expect(design.overturningMoment[0]).toBeCloseTo(
+      analysis.combined.cqc.overturningMoment[0] * design.forceFactor,
+      4,
+    );
+  });
+
+  it('EN 1998-1: the design spectrum gives the design forces; displacements x q (4.3.4)', async () => {
+    const body = (await checks(EN).expect(200)).body as ChecksResponse;
+    const design = body.design!;
+    expect(design.analysisValues).toBe('design');
+    expect(design.forceFactor).toBe(1);
+    expect(design.displacementFactor).toBe(3.9);
+    expect(design.explanation).toContain('4.3.4');
+  });
+
+  it('follows the combination the checks use', async () => {
+    const body = (await checks(ASCE, { combination: 'srss' }).expect(200)).body as ChecksResponse;
+    expect(body.design?.combination).toBe('srss');
+  });
+});

@@ -5,17 +5,20 @@ import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
 const CALC = 'Loading-dock storey study, north-south';
 
 // The laboratory's site and frame, as invented for the demo: a steel moment frame (R 8, Cd 5.5,
-// Ct 0.0724, x 0.8) in risk category III (Ie 1.25).
+// Ct 0.0724, x 0.8) in risk category III (Ie 1.25). SDS, SD1, S1 and TL come from the generated
+// spectrum (0.8 g, 0.45 g, 0.4 g, 6 s) and cannot be typed apart from it.
 const BASIS: Record<string, string> = {
+  R: '8',
+  Cd: '5.5',
+  Ie: '1.25',
+  'Ct (hn in m)': '0.0724',
+  x: '0.8',
+};
+const FROM_SPECTRUM: Record<string, string> = {
   'SDS (g)': '0.8',
   'SD1 (g)': '0.45',
   'S1 (g)': '0.4',
   'TL (s)': '6',
-  R: '8',
-  Cd: '5.5',
-  Ie: '1.25',
-  'Ct (SI)': '0.0724',
-  x: '0.8',
 };
 
 async function analyseAndOpenChecks(page: Page) {
@@ -39,6 +42,15 @@ describe('Code-basis checks (designer)', () => {
     await page.getByRole('heading', { name: CALC }).waitFor();
     await page.getByRole('tab', { name: 'Checks' }).click();
     const form = page.getByRole('form', { name: 'Code basis' });
+    for (const [label, value] of Object.entries(FROM_SPECTRUM)) {
+      const field = form.getByLabel(label, { exact: true });
+      expect(await field.inputValue()).toBe(value);
+      expect(await field.isDisabled()).toBe(true);
+    }
+    await form
+      .getByTestId('basis-from-spectrum')
+      .getByText('From the design spectrum: SDS 0.8 g, SD1 0.45 g, S1 0.4 g, TL 6 s.')
+      .waitFor();
     for (const [label, value] of Object.entries(BASIS)) {
       await form.getByLabel(label, { exact: true }).fill(value);
     }

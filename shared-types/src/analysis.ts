@@ -189,6 +189,11 @@ export interface SpectrumGenerateRequest {
   sds?: number;
   sd1?: number;
   tl?: number;
+  /**
+   * ASCE 7: the mapped S1 (g), optional. It does not shape the spectrum; it is recorded with the
+   * source so that the code basis takes it (Eq. 12.8-6 applies where S1 >= 0.6 g).
+   */
+  s1?: number;
   /** EN 1998-1: agR (g), gamma_I, ground type, spectrum type 1 or 2. */
   agR?: number;
   importanceFactor?: number;

@@ -81,6 +81,36 @@ export interface StoreyCheck {
   scaledShear: number;
 }
 
+/**
+ * The design storey values beside the analysis's combined ones (the combination the checks
+ * use): forces x `forceFactor`, displacements and drifts x `displacementFactor`.
+ */
+export interface DesignStoreyValues {
+  /**
+   * What the analysis's own values are: `elastic` (ASCE 7 and a user basis: the spectrum as
+   * published) or `design` (EN 1998-1: the design spectrum already includes q).
+   */
+  analysisValues: 'elastic' | 'design';
+  /** The combined values the factors apply to. */
+  combination: 'cqc' | 'srss';
+  /** ASCE 7-22: scale / (R / Ie); EN 1998-1: 1; user: the scale factor. */
+  forceFactor: number;
+  /** ASCE 7-22: (Cd / Ie) / (R / Ie) x drift scale; EN 1998-1: q (4.3.4); user: its amplification. */
+  displacementFactor: number;
+  /** How the factors arise, with clauses. */
+  explanation: string;
+  /** N per level */
+  floorForce: number[];
+  /** N per storey */
+  storeyShear: number[];
+  /** N*m at the base of each storey */
+  overturningMoment: number[];
+  /** m per level */
+  displacement: number[];
+  /** m per storey */
+  drift: number[];
+}
+
 export interface ChecksResponse {
   code: CodeBasisParameters['code'];
   elf: {
@@ -114,4 +144,12 @@ export interface ChecksResponse {
   }[];
   /** Plain statements of what passed, failed or needs the engineer's attention, with clauses. */
   notes: string[];
+  /**
+   * Where the basis and the design spectrum disagree (a generated spectrum's SDS, ag, q... that
+   * the basis does not share, or a spectrum of another code). Absent from checks stored before
+   * this existed.
+   */
+  warnings?: string[];
+  /** Absent from checks stored before it existed. */
+  design?: DesignStoreyValues;
 }

@@ -9,3 +9,6 @@ export * from './calculations';
 export * from './audit';
 export * from './checks';
 export * from './number-format';
+export * from './spectrum-source';
+export * from './spectrum-table';
+export * from './dates';

@@ -1,12 +1,21 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
 import type { CalculationInputs } from '@tiermode/shared-types';
 import { analyse } from '../analysis/engine/analyse';
-import { asce7TwoPeriodSpectrum } from '../analysis/engine/spectrum-generators';
+import { generateSpectrum } from '../analysis/engine/spectrum-generators';
 import { appendAuditEvent } from '../audit/append-audit-event';
 import type { SigningKey } from '../signing/signing-key';
 import { Calculation } from '../calculations/calculation.entity';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
+
+/** A generated ASCE 7 spectrum as a calc stores it: the table, its interpolation and source. */
+function asce7Spectrum(parameters: { sds: number; sd1: number; tl: number; s1: number }) {
+  const { points, interpolation, source } = generateSpectrum({
+    kind: 'asce7-two-period',
+    ...parameters,
+  });
+  return { points, interpolation, source };
+}
 
 /** An invented firm's two buildings, with invented storey data (SI base units). */
 function housingBlock(): CalculationInputs {
@@ -19,10 +28,7 @@ function housingBlock(): CalculationInputs {
       stiffness: stiffness[i] * 1e9,
       height: i === 0 ? 4.0 : 3.1,
     })),
-    spectrum: {
-      points: asce7TwoPeriodSpectrum({ sds: 1.0, sd1: 0.6, tl: 8 }),
-      interpolation: 'log-log',
-    },
+    spectrum: asce7Spectrum({ sds: 1.0, sd1: 0.6, tl: 8, s1: 0.6 }),
     dampingRatio: 0.05,
   };
 }
@@ -35,10 +41,7 @@ function laboratory(): CalculationInputs {
       stiffness: (1.4 - (0.8 * i) / 11) * 1e9,
       height: i === 0 ? 4.5 : 3.8,
     })),
-    spectrum: {
-      points: asce7TwoPeriodSpectrum({ sds: 0.8, sd1: 0.45, tl: 6 }),
-      interpolation: 'log-log',
-    },
+    spectrum: asce7Spectrum({ sds: 0.8, sd1: 0.45, tl: 6, s1: 0.4 }),
     dampingRatio: 0.05,
   };
 }

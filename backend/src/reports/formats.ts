@@ -1,3 +1,5 @@
+import { formatDateTime } from '@tiermode/shared-types';
+
 const grouped = (digits: number) =>
   new Intl.NumberFormat('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
@@ -16,5 +18,5 @@ export const formats = {
   plain: (x: number) => x.toPrecision(4),
 };
 
-export const isoDate = (iso: string | null) =>
-  iso ? new Date(iso).toISOString().replace('T', ' ').slice(0, 16) + ' UTC' : '-';
+/** The product's one date-and-time format (shared with the screens). */
+export const isoDate = (iso: string | null) => formatDateTime(iso, '-');

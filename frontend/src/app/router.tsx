@@ -10,6 +10,7 @@ import { ProjectsRoute } from './routes/projects';
 import { HomeRoute } from './routes/home';
 import { SetPasswordRoute } from './routes/set-password';
 import { SignInRoute } from './routes/sign-in';
+import { SignOutRoute } from './routes/sign-out';
 import { UsersRoute } from './routes/users';
 import { VerificationRoute } from './routes/verification';
 
@@ -28,6 +29,7 @@ const router = createBrowserRouter([
       { path: 'outbox', element: <OutboxRoute /> },
       { path: 'analysis', element: <AnalysisRoute /> },
       { path: 'users', element: <UsersRoute /> },
+      { path: 'sign-out', element: <SignOutRoute /> },
       { path: 'verification', element: <VerificationRoute /> },
       { path: '*', element: <NotFound /> },
     ],

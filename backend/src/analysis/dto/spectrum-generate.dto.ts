@@ -38,6 +38,13 @@ export class SpectrumGenerateDto implements SpectrumGenerateRequest {
   @apply(...positiveNumber('tl', 's', LIMITS.tl))
   tl?: number;
 
+  @IsOmittable()
+  @ValidateIf(asce)
+  @IsNumber(FINITE, { message: 's1 must be a number (g)' })
+  @Min(0, { message: 's1 must be a number >= 0 (g)' })
+  @Max(LIMITS.acceleration, { message: `s1 must be at most ${LIMITS.acceleration} (g)` })
+  s1?: number;
+
   @ValidateIf(en)
   @apply(...positiveNumber('agR', 'g', LIMITS.acceleration))
   agR?: number;

@@ -1,3 +1,4 @@
+import { interpolateSpectrum } from '@tiermode/shared-types';
 import { isArray } from './guards';
 /** One point of a design spectrum: period T (s) and spectral acceleration Sa (g). */
 export interface SpectrumPoint {
@@ -57,25 +58,8 @@ export function spectralAcceleration(
   if (period > last.period) {
     return { sa: last.sa, warning: outside(period, 'above', last.period) };
   }
-  // Binary search for the segment [lo, lo + 1] holding the period.
-  let lo = 0;
-  let hi = points.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (points[mid].period <= period) lo = mid;
-    else hi = mid;
-  }
-  const a = points[lo];
-  const b = points[hi];
-  if (period === a.period) return { sa: a.sa };
-  if (period === b.period) return { sa: b.sa };
-  const logLog = interpolation === 'log-log' && a.period > 0 && a.sa > 0 && b.sa > 0;
-  if (logLog) {
-    const t = Math.log(period / a.period) / Math.log(b.period / a.period);
-    return { sa: Math.exp(Math.log(a.sa) + t * Math.log(b.sa / a.sa)) };
-  }
-  const t = (period - a.period) / (b.period - a.period);
-  return { sa: a.sa + t * (b.sa - a.sa) };
+  // Inside the table: the one interpolation the plots use too.
+  return { sa: interpolateSpectrum(points, period, interpolation) as number };
 }
 
 function outside(period: number, side: 'below' | 'above', end: number): string {

@@ -4,7 +4,6 @@ import { useEffect, useMemo, useSyncExternalStore } from 'react';
 import { Navigate, Outlet, useLocation, useNavigate } from 'react-router';
 import { AppShell } from '@/components/layouts/app-shell';
 import { useMe } from '@/features/auth/api/get-me';
-import { useLogout } from '@/features/auth/api/logout';
 import { AbilityProvider } from '@casl/react';
 import { buildAbility } from '@/lib/ability';
 import { errorMessages, onUnauthorized } from '@/lib/api-client';
@@ -17,7 +16,6 @@ export function AppRoot() {
   const location = useLocation();
   const navigate = useNavigate();
   const me = useMe(Boolean(session));
-  const logout = useLogout();
   const ability = useMemo(() => buildAbility(me.data?.rules ?? []), [me.data]);
 
   useEffect(
@@ -45,7 +43,7 @@ export function AppRoot() {
         entries={navigationFor(ability)}
         userName={user.name}
         roleLabel={ROLE_LABELS[user.role] + (user.licensed ? ' (licensed)' : '')}
-        onSignOut={() => logout.mutate(undefined, { onSettled: () => void navigate('/sign-in') })}
+        onSignOut={() => void navigate('/sign-out')}
       >
         <Outlet />
       </AppShell>

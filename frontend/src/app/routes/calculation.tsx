@@ -1,10 +1,12 @@
+import { formatDateTime } from '@tiermode/shared-types';
 import { Alert, Button, LinearProgress, Link, Stack, Tab, Tabs, Typography } from '@mui/material';
 import type { CalculationDto, UserDto } from '@tiermode/shared-types';
 import { AxiosError } from 'axios';
 import { useState } from 'react';
-import { Link as RouterLink, useNavigate, useParams } from 'react-router';
+import { Link as RouterLink, useNavigate, useParams, useSearchParams } from 'react-router';
 import { RequestFailed } from '@/components/errors/request-failed';
 import { CautionBanner } from '@/components/feedback/caution-banner';
+import { LeaveGuard } from '@/components/feedback/leave-guard';
 import { StatusChip } from '@/components/feedback/status-chip';
 import { AnalysisSettings } from '@/features/analysis/components/analysis-settings';
 import { AnalysisResults, Section } from '@/features/analysis/components/results/analysis-results';
@@ -37,6 +39,18 @@ import type { UnitSystem } from '@/lib/units';
 const TABS = ['Storey table', 'Design spectrum', 'Results', 'Checks', 'Review', 'History'] as const;
 type TabName = (typeof TABS)[number];
 
+/** Each tab's name in the address (`?tab=results`), so Back returns to the tab before. */
+const TAB_SLUGS: Record<TabName, string> = {
+  'Storey table': 'storeys',
+  'Design spectrum': 'spectrum',
+  Results: 'results',
+  Checks: 'checks',
+  Review: 'review',
+  History: 'history',
+};
+const tabOf = (slug: string | null): TabName =>
+  TABS.find((name) => TAB_SLUGS[name] === slug) ?? 'Storey table';
+
 /** A saved calculation: its inputs, stored results, review and history, in tabs. */
 export function CalculationRoute() {
   const { id = '' } = useParams();
@@ -52,7 +66,14 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
   const navigate = useNavigate();
   const inputs = useAnalysisInputs(calc.inputs);
   const [units, setUnits] = useState<UnitSystem>(calc.displayUnits);
-  const [tab, setTab] = useState<TabName>('Storey table');
+  const [searchParams, setSearchParams] = useSearchParams();
+  const tab = tabOf(searchParams.get('tab'));
+  const setTab = (name: TabName) =>
+    setSearchParams((params) => {
+      const next = new URLSearchParams(params);
+      next.set('tab', TAB_SLUGS[name]);
+      return next;
+    });
   const save = useSaveCalculation(calc.id);
   const analyse = useSaveAndAnalyse(calc.id);
 
@@ -66,9 +87,10 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
   const ofRecord = calc.status === 'locked' || calc.status === 'superseded';
   // A draft that never went to review may be thrown away by its author.
   const deletable = calc.submittedAt === null && canOn(ability, 'delete', 'Calculation', record);
-  // The units are saved with the calc by whoever may edit it; anyone else switches them for
-  // their own view only.
-  const dirty = editable && (!sameJson(inputs.request, calc.inputs) || units !== calc.displayUnits);
+  // Switching units is a way of looking, not an edit: it never marks the calc unsaved. The
+  // units shown are saved with the calc's next save, by whoever may edit it.
+  // Edits that cannot be saved yet (a marked cell: request null) count as unsaved too.
+  const dirty = editable && !sameJson(inputs.request, calc.inputs);
   const saveError = save.error ?? analyse.error;
   const conflict = saveError instanceof AxiosError && saveError.response?.status === 409;
   const busy = save.isPending || analyse.isPending;
@@ -91,6 +113,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
 
   return (
     <Stack spacing={2}>
+      <LeaveGuard when={dirty && !busy} what="edits to this calc" />
       <Stack
         direction="row"
         sx={{ alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap', gap: 1 }}
@@ -225,9 +248,8 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
             {result && calc.analysisStale && (
               <Alert severity="warning" role="alert">
                 These results are older than the saved inputs (analysed{' '}
-                {calc.analysedAt ? new Date(calc.analysedAt).toLocaleString() : ''}, inputs changed{' '}
-                {new Date(calc.inputsChangedAt).toLocaleString()}). Analyse again before relying on
-                them.
+                {formatDateTime(calc.analysedAt, '')}, inputs changed{' '}
+                {formatDateTime(calc.inputsChangedAt)}). Analyse again before relying on them.
               </Alert>
             )}
             {dirty && (
@@ -239,7 +261,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
               <>
                 <Typography color="text.secondary">
                   Engine {calc.engineVersion}
-                  {calc.analysedAt ? `, ${new Date(calc.analysedAt).toLocaleString()}` : ''}.
+                  {calc.analysedAt ? `, ${formatDateTime(calc.analysedAt)}` : ''}.
                 </Typography>
                 <AnalysisResults result={result} storeys={calc.inputs.storeys} units={units} />
               </>
@@ -253,6 +275,8 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
                 basis={calc.basis}
                 defaultCode="ASCE7-22"
                 storeys={calc.inputs.storeys.length}
+                spectrumSource={inputs.spectrum.source}
+                units={units}
                 readOnly={!editable}
                 saving={save.isPending}
                 onSave={(basis) => save.mutate({ version: calc.version, basis })}
@@ -267,9 +291,14 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
                 update them.
               </Alert>
             )}
-            {calc.checks && !calc.analysisStale && (
+            {calc.checks && calc.analysis && !calc.analysisStale && (
               <Section title="Checks">
-                <ChecksResults checks={calc.checks} storeys={calc.inputs.storeys} units={units} />
+                <ChecksResults
+                  checks={calc.checks}
+                  analysis={calc.analysis}
+                  storeys={calc.inputs.storeys}
+                  units={units}
+                />
               </Section>
             )}
           </Stack>

@@ -1,11 +1,13 @@
-import type {
-  AnalysisResponse,
-  Asce7Basis,
-  ChecksRequest,
-  ChecksResponse,
-  En1998Basis,
-  StoreyCheck,
-  UserBasis,
+import {
+  spectrumBasisMismatches,
+  type AnalysisResponse,
+  type Asce7Basis,
+  type ChecksRequest,
+  type ChecksResponse,
+  type DesignStoreyValues,
+  type En1998Basis,
+  type StoreyCheck,
+  type UserBasis,
 } from '@tiermode/shared-types';
 import { analyse } from '../analyse';
 import { naturalModes } from '../modes';
@@ -62,7 +64,55 @@ export function runChecks(request: ChecksRequest): {
       : basis.code === 'EN1998-1'
         ? en1998(request, basis, analysis, combined)
         : userDefined(request, basis, analysis, combined);
-  return { analysis, checks: { ...checks, irregularities } };
+  // The basis and the spectrum must be one site's: a generated spectrum's SDS, ag, q... that the
+  // basis does not share would give checks of another building than the one analysed.
+  const warnings = spectrumBasisMismatches(basis, request.spectrum.source);
+  const design = designValues(basis, checks, combined, request.combination ?? 'cqc');
+  return { analysis, checks: { ...checks, irregularities, warnings, design } };
+}
+
+/**
+ * The design storey values: the combined values the checks use, reduced and scaled as the basis
+ * says. Forces and displacements scale linearly, so each combined quantity takes the factor.
+ */
+function designValues(
+  basis: ChecksRequest['basis'],
+  checks: BasisChecks,
+  combined: Combined,
+  combination: DesignStoreyValues['combination'],
+): DesignStoreyValues {
+  let analysisValues: DesignStoreyValues['analysisValues'] = 'elastic';
+  let forceFactor: number;
+  let displacementFactor: number;
+  let explanation: string;
+  if (basis.code === 'ASCE7-22') {
+    const reduction = basis.r / basis.ie;
+    forceFactor = checks.scaleFactor / reduction;
+    displacementFactor = (basis.cd / basis.ie / reduction) * checks.driftScaleFactor;
+    explanation = `Design forces = elastic / (R / Ie) x ${checks.scaleFactor.toPrecision(4)} (ASCE 7-22 12.9.1.2, 12.9.1.4.1); design displacements = elastic / (R / Ie) x Cd / Ie${checks.driftScaleFactor > 1 ? ` x ${checks.driftScaleFactor.toPrecision(4)} (12.9.1.4.2)` : ''} (12.8.6, 12.9.1.2).`;
+  } else if (basis.code === 'EN1998-1') {
+    analysisValues = 'design';
+    forceFactor = 1;
+    displacementFactor = basis.q;
+    explanation = `The design spectrum (EN 1998-1 3.2.2.5) already includes q, so the analysis gives the design forces; design displacements d_s = q d_e with q = ${basis.q} (4.3.4).`;
+  } else {
+    forceFactor = basis.scaleFactor;
+    displacementFactor = basis.deflectionAmplification;
+    explanation = `Design forces = elastic x the basis's scale factor ${basis.scaleFactor}; design displacements = elastic x its deflection amplification ${basis.deflectionAmplification} (user-defined).`;
+  }
+  const times = (values: number[], factor: number) => values.map((v) => v * factor);
+  return {
+    analysisValues,
+    combination,
+    forceFactor,
+    displacementFactor,
+    explanation,
+    floorForce: times(combined.floorForce, forceFactor),
+    storeyShear: times(combined.storeyShear, forceFactor),
+    overturningMoment: times(combined.overturningMoment, forceFactor),
+    displacement: times(combined.displacement, displacementFactor),
+    drift: times(combined.drift, displacementFactor),
+  };
 }
 
 type BasisChecks = Omit<ChecksResponse, 'irregularities'>;

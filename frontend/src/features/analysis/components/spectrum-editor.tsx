@@ -1,14 +1,20 @@
 import DeleteIcon from '@mui/icons-material/Delete';
-import { Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { DataGrid, GridActionsCellItem, type GridColDef } from '@mui/x-data-grid';
-import type { SpectrumInput, SpectrumInterpolation } from '@tiermode/shared-types';
+import {
+  describeSpectrumSource,
+  spectrumPointProblems,
+  type SpectrumInput,
+  type SpectrumInterpolation,
+} from '@tiermode/shared-types';
+import { SPECTRUM_LIMITS } from '../model/use-analysis-inputs';
 import { SpectrumChart } from './spectrum-chart';
 import { SpectrumGeneratorForm } from './spectrum-generator-form';
 import { SpectrumUpload } from './spectrum-upload';
 
 interface SpectrumEditorProps {
   spectrum: SpectrumInput;
-  modes: { number: number; period: number; sa: number }[];
+  modes: { number: number; period: number }[];
   onChange: (spectrum: SpectrumInput) => void;
   /** Shown, not edited. */
   readOnly?: boolean;
@@ -29,6 +35,12 @@ export function SpectrumEditor({
   const setPoints = (points: SpectrumInput['points']) =>
     onChange({ ...spectrum, points, source: { kind: 'user' } });
   const generator = spectrum.source && spectrum.source.kind !== 'user' ? spectrum.source : null;
+  const problems = spectrumPointProblems(spectrum.points, SPECTRUM_LIMITS);
+  const invalid = new Set(problems.map((p) => `${p.index}:${p.field}`));
+  const marked = (field: 'period' | 'sa') => ({
+    cellClassName: (params: { row: PointRow }) =>
+      invalid.has(`${params.row.id}:${field}`) ? 'cell-invalid' : '',
+  });
   const pointColumns: GridColDef<PointRow>[] = [
     {
       field: 'period',
@@ -36,8 +48,16 @@ export function SpectrumEditor({
       type: 'number',
       editable: !readOnly,
       flex: 1,
+      ...marked('period'),
     },
-    { field: 'sa', headerName: 'Sa (g)', type: 'number', editable: !readOnly, flex: 1 },
+    {
+      field: 'sa',
+      headerName: 'Sa (g)',
+      type: 'number',
+      editable: !readOnly,
+      flex: 1,
+      ...marked('sa'),
+    },
   ];
   const deleteColumn: GridColDef<PointRow> = {
     field: 'actions',
@@ -57,6 +77,7 @@ export function SpectrumEditor({
     <Stack spacing={2}>
       {!readOnly && (
         <SpectrumGeneratorForm
+          source={spectrum.source}
           onGenerated={(g) =>
             onChange({ points: g.points, interpolation: g.interpolation, source: g.source })
           }
@@ -77,13 +98,19 @@ export function SpectrumEditor({
             <MenuItem value="linear">Linear in T</MenuItem>
             <MenuItem value="log-log">Log-log</MenuItem>
           </TextField>
-          <Box sx={{ height: 300 }}>
+          <Box
+            sx={{
+              height: 300,
+              '& .cell-invalid': { bgcolor: 'error.light', color: 'error.contrastText' },
+            }}
+          >
             <DataGrid
               aria-label="Spectrum points"
               rows={rows}
               columns={columns}
               density="compact"
               disableColumnMenu
+              disableColumnSorting
               hideFooter={rows.length <= 100}
               processRowUpdate={(row: PointRow) => {
                 setPoints(
@@ -95,6 +122,13 @@ export function SpectrumEditor({
               }}
             />
           </Box>
+          {problems.length > 0 && (
+            <Alert severity="error" role="alert" aria-label="Spectrum problems">
+              {problems.map((p) => (
+                <div key={`${p.index}:${p.field}`}>{p.message}</div>
+              ))}
+            </Alert>
+          )}
           {!readOnly && <SpectrumUpload onPoints={setPoints} />}
           <Button
             sx={{ display: readOnly ? 'none' : undefined }}
@@ -108,18 +142,14 @@ export function SpectrumEditor({
           >
             Add a point
           </Button>
-          {generator && (
-            <Typography variant="caption" data-testid="spectrum-source">
-              Generated ({generator.kind}):{' '}
-              {Object.entries(generator.parameters)
-                .map(([name, value]) => `${name} ${String(value)}`)
-                .join(', ')}
-              . Past the table's end the generator's own formula gives Sa.
-            </Typography>
-          )}
+          <Typography variant="body2" data-testid="spectrum-source">
+            Source: {describeSpectrumSource(spectrum.source)}.
+            {generator
+              ? " Past the table's end the generator's own formula gives Sa."
+              : ' Past its end the last value is used, with a warning.'}
+          </Typography>
           <Typography variant="caption" color="text.secondary">
-            Periods must increase down the table. Outside a typed or edited table the nearest end
-            value is used, with a warning.
+            Periods must increase down the table.
           </Typography>
         </Stack>
         <Box sx={{ flex: 1, minWidth: 0 }}>

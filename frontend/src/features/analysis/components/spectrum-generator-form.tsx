@@ -1,5 +1,10 @@
 import { Alert, Button, MenuItem, Stack, TextField } from '@mui/material';
-import type { SpectrumGenerateRequest, SpectrumGenerateResponse } from '@tiermode/shared-types';
+import {
+  SPECTRUM_GENERATOR_LABELS,
+  type SpectrumGenerateRequest,
+  type SpectrumGenerateResponse,
+  type SpectrumSource,
+} from '@tiermode/shared-types';
 import { useState } from 'react';
 import { errorMessages } from '@/lib/api-client';
 import { useGenerateSpectrum } from '../api/generate-spectrum';
@@ -14,6 +19,7 @@ const FIELDS: Record<
     { name: 'sds', label: 'SDS (g)', initial: '1.0' },
     { name: 'sd1', label: 'SD1 (g)', initial: '0.6' },
     { name: 'tl', label: 'TL (s)', initial: '8' },
+    { name: 's1', label: 'S1 (g), for the checks', initial: '' },
   ],
   'en1998-elastic': [
     { name: 'agR', label: 'agR (g)', initial: '0.25' },
@@ -28,23 +34,42 @@ const FIELDS: Record<
   ],
 };
 
-const KIND_LABELS: Record<Kind, string> = {
-  'asce7-two-period': 'ASCE 7 two-period (11.4.6)',
-  'en1998-elastic': 'EN 1998-1 elastic (3.2.2.2)',
-  'en1998-design': 'EN 1998-1 design (3.2.2.5)',
-};
+/** The form's starting values: those the spectrum was generated with, where it was. */
+function startingValues(source: SpectrumSource | undefined) {
+  if (!source || source.kind === 'user') {
+    return { kind: 'asce7-two-period' as Kind, values: {}, groundType: 'C', spectrumType: '1' };
+  }
+  const { groundType, spectrumType, ...numbers } = source.parameters;
+  return {
+    kind: source.kind,
+    values: Object.fromEntries(
+      Object.entries(numbers)
+        .filter(([, v]) => v !== undefined)
+        .map(([name, v]) => [name, String(v)]),
+    ) as Record<string, string>,
+    groundType: groundType ?? 'C',
+    spectrumType: String(spectrumType ?? 1),
+  };
+}
 
-/** Generates an editable spectrum table from code parameters; the server checks them. */
+/**
+ * Generates an editable spectrum table from code parameters; the server checks them. It opens
+ * with the parameters the current spectrum was generated with, so a reload shows the values
+ * behind the table, not the defaults.
+ */
 export function SpectrumGeneratorForm({
+  source,
   onGenerated,
 }: {
+  source?: SpectrumSource;
   onGenerated: (r: SpectrumGenerateResponse) => void;
 }) {
   const generate = useGenerateSpectrum();
-  const [kind, setKind] = useState<Kind>('asce7-two-period');
-  const [values, setValues] = useState<Record<string, string>>({});
-  const [groundType, setGroundType] = useState('C');
-  const [spectrumType, setSpectrumType] = useState('1');
+  const [start] = useState(() => startingValues(source));
+  const [kind, setKind] = useState<Kind>(start.kind);
+  const [values, setValues] = useState<Record<string, string>>(start.values);
+  const [groundType, setGroundType] = useState(start.groundType);
+  const [spectrumType, setSpectrumType] = useState(start.spectrumType);
   const value = (name: string, initial: string) => values[name] ?? initial;
   const isEn = kind !== 'asce7-two-period';
 
@@ -54,6 +79,8 @@ export function SpectrumGeneratorForm({
       const text = value(f.name, f.initial).trim();
       body[f.name] = text === '' ? undefined : Number(text);
     }
+    // Kept from the spectrum it opened with, though the form has no field for it.
+    if (values.maxPeriod !== undefined) body.maxPeriod = Number(values.maxPeriod);
     if (isEn) {
       body.groundType = groundType;
       body.spectrumType = Number(spectrumType);
@@ -78,9 +105,9 @@ export function SpectrumGeneratorForm({
         value={kind}
         onChange={(e) => setKind(e.target.value as Kind)}
       >
-        {(Object.keys(KIND_LABELS) as Kind[]).map((k) => (
+        {(Object.keys(SPECTRUM_GENERATOR_LABELS) as Kind[]).map((k) => (
           <MenuItem key={k} value={k}>
-            {KIND_LABELS[k]}
+            {SPECTRUM_GENERATOR_LABELS[k]}
           </MenuItem>
         ))}
       </TextField>
@@ -90,7 +117,7 @@ export function SpectrumGeneratorForm({
             key={`${kind}-${f.name}`}
             label={f.label}
             size="small"
-            sx={{ width: 150 }}
+            sx={{ width: 170 }}
             value={value(f.name, f.initial)}
             onChange={(e) => setValues({ ...values, [f.name]: e.target.value })}
             slotProps={{ htmlInput: { inputMode: 'decimal' } }}

@@ -252,6 +252,8 @@ export function StoreyTable({
           columns={columns}
           hideFooter={rows.length <= 100}
           disableColumnMenu
+          // Storey order is the building's: storey 1 at the base. A header click never reorders it.
+          disableColumnSorting
           disableRowSelectionOnClick
           processRowUpdate={(updated: DisplayRow) => {
             const row: StoreyRow = {

@@ -1,4 +1,9 @@
-import type { AnalysisRequest, SpectrumInput } from '@tiermode/shared-types';
+import {
+  ANALYSIS_LIMITS,
+  spectrumPointProblems,
+  type AnalysisRequest,
+  type SpectrumInput,
+} from '@tiermode/shared-types';
 import { useCallback, useMemo, useState } from 'react';
 import { fromStoreyInputs, storeyProblems, toStoreyInputs, type StoreyRow } from './storey-rows';
 
@@ -22,6 +27,12 @@ export interface AnalysisInputsState {
   reset: (inputs: AnalysisRequest) => void;
 }
 
+/** The point counts the analysis accepts. */
+export const SPECTRUM_LIMITS = {
+  min: ANALYSIS_LIMITS.minSpectrumPoints,
+  max: ANALYSIS_LIMITS.maxSpectrumPoints,
+};
+
 const percent = (ratio: number) => String(Number((ratio * 100).toPrecision(10)));
 
 /** The editable inputs of an analysis, starting from `initial`. */
@@ -38,6 +49,7 @@ export function useAnalysisInputs(initial: AnalysisRequest): AnalysisInputsState
       : null;
   const request = useMemo<AnalysisRequest | null>(() => {
     if (storeyProblems(rows).length > 0 || dampingProblem) return null;
+    if (spectrumPointProblems(spectrum.points, SPECTRUM_LIMITS).length > 0) return null;
     return {
       storeys: toStoreyInputs(rows),
       spectrum,

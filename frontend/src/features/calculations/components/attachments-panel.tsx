@@ -1,3 +1,4 @@
+import { formatDateTime } from '@tiermode/shared-types';
 import AttachFileIcon from '@mui/icons-material/AttachFile';
 import { Alert, Box, Button, Link, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
@@ -50,7 +51,7 @@ const baseColumns: GridColDef<AttachmentDto>[] = [
     field: 'uploadedAt',
     headerName: 'Added',
     width: 170,
-    valueFormatter: (v: string) => new Date(v).toLocaleString(),
+    valueFormatter: (v: string) => formatDateTime(v),
   },
 ];
 

@@ -1,3 +1,4 @@
+import { formatDate } from '@tiermode/shared-types';
 import { Alert, Box } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { CalculationListQuery, CalculationSummaryDto } from '@tiermode/shared-types';
@@ -5,7 +6,7 @@ import { calcColumns } from '@/components/data-display/calc-columns';
 import { errorMessages } from '@/lib/api-client';
 import { useCalculations } from '../api/calculations';
 
-const date = (value: string | null) => (value ? new Date(value).toLocaleDateString() : '');
+const date = (value: string | null) => formatDate(value, '');
 
 const columns: GridColDef<CalculationSummaryDto>[] = [
   ...calcColumns<CalculationSummaryDto>(),

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@tiermode/shared-types';
 import {
   Button,
   Checkbox,
@@ -85,7 +86,7 @@ export function CommentThread({ calc }: { calc: CalculationDto }) {
               <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
                 <Typography variant="subtitle2">{c.author.name}</Typography>
                 <Typography variant="caption" color="text.secondary">
-                  {new Date(c.createdAt).toLocaleString()}
+                  {formatDateTime(c.createdAt)}
                 </Typography>
                 <Chip size="small" variant="outlined" label={c.target ?? 'Whole calc'} />
                 {c.resolved && <Chip size="small" color="success" label="Resolved" />}

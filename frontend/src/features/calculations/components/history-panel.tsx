@@ -1,3 +1,4 @@
+import { formatDateTime } from '@tiermode/shared-types';
 import { Alert, Box, Link, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { AuditEventDto, CalculationDto } from '@tiermode/shared-types';
@@ -25,7 +26,7 @@ const columns: GridColDef<AuditEventDto>[] = [
     field: 'at',
     headerName: 'When',
     width: 190,
-    valueFormatter: (value: string) => new Date(value).toLocaleString(),
+    valueFormatter: (value: string) => formatDateTime(value),
   },
   { field: 'actorName', headerName: 'Who', width: 150 },
   {

@@ -1,10 +1,9 @@
 import { Alert, AlertTitle, Box, Card, CardContent, Skeleton, Typography } from '@mui/material';
-import type { CalculationDto } from '@tiermode/shared-types';
+import { formatDateTime, type CalculationDto } from '@tiermode/shared-types';
 import { errorMessages } from '@/lib/api-client';
 import { useSeal } from '../api/calculations';
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (iso: string) => formatDateTime(iso);
 
 const SIGNATURE = {
   valid: 'verifies with the server’s key',

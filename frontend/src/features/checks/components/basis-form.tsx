@@ -1,23 +1,44 @@
-import { Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
-import { CODE_BASIS_LABELS, CODE_BASES, type CodeBasisParameters } from '@tiermode/shared-types';
+import { Alert, AlertTitle, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import {
+  basisValuesFromSpectrum,
+  CODE_BASIS_LABELS,
+  CODE_BASES,
+  spectrumBasisMismatches,
+  type CodeBasisParameters,
+  type SpectrumSource,
+} from '@tiermode/shared-types';
 import { useFormik } from 'formik';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
+import type { UnitSystem } from '@/lib/units';
 import {
   basisSchema,
+  ctToDisplay,
   FIELDS,
+  fieldLabel,
   fromBasis,
   PERIOD_SYSTEMS,
   PER_LEVEL,
   perLevel,
+  perLevelLabel,
   toBasis,
   type BasisFormValues,
 } from './basis-schema';
 
-/** The code basis and its parameters, each with the clause it comes from. */
+/** A basis value as typed: ten significant digits at most (1.2 x 0.25 reads 0.3). */
+const shown = (value: number | string) =>
+  typeof value === 'number' ? String(Number(value.toPrecision(10))) : value;
+
+/**
+ * The code basis and its parameters, each with the clause it comes from. Where the design
+ * spectrum was generated for this code, the values it was generated with (SDS, SD1, TL, ag, q...)
+ * are taken from it and cannot be typed apart from it; a saved basis that disagrees is said.
+ */
 export function BasisForm({
   basis,
   defaultCode,
   storeys,
+  spectrumSource,
+  units,
   readOnly,
   saving,
   onSave,
@@ -26,13 +47,27 @@ export function BasisForm({
   /** The number of storeys, for the per-level list. */
   storeys: number;
   defaultCode: CodeBasisParameters['code'];
+  /** Where the calc's design spectrum came from. */
+  spectrumSource?: SpectrumSource;
+  units: UnitSystem;
   readOnly: boolean;
   saving: boolean;
   onSave: (basis: CodeBasisParameters) => void;
 }) {
   const [code, setCode] = useState<CodeBasisParameters['code']>(basis?.code ?? defaultCode);
+  const fromSpectrum = useMemo(
+    () => basisValuesFromSpectrum(spectrumSource, code),
+    [spectrumSource, code],
+  );
+  const fixed = new Set(fromSpectrum.map((v) => v.field));
+  const initialValues = useMemo(() => {
+    const values = fromBasis(basis, code, units);
+    for (const v of fromSpectrum) values[v.field] = shown(v.value);
+    return values;
+  }, [basis, code, units, fromSpectrum]);
+  const mismatches = basis ? spectrumBasisMismatches(basis, spectrumSource) : [];
   const form = useFormik<BasisFormValues>({
-    initialValues: fromBasis(basis, code),
+    initialValues,
     enableReinitialize: true,
     validationSchema: basisSchema(code),
     validate: (values) => {
@@ -44,7 +79,7 @@ export function BasisForm({
         return { [PER_LEVEL[code].name]: (error as Error).message };
       }
     },
-    onSubmit: (values) => onSave(toBasis(values, storeys)),
+    onSubmit: (values) => onSave(toBasis(values, storeys, units)),
   });
   return (
     <Stack
@@ -78,16 +113,17 @@ export function BasisForm({
           onChange={(e) => {
             const system = PERIOD_SYSTEMS.find((s) => s.label === e.target.value);
             if (system) {
-              void form.setFieldValue('ct', String(system.ct));
+              const shown = ctToDisplay(units, system.ct, system.x);
+              void form.setFieldValue('ct', String(Number(shown.toPrecision(3))));
               void form.setFieldValue('x', String(system.x));
             }
           }}
-          helperText="ASCE 7-22 Table 12.8-2 (SI, from memory)"
+          helperText="ASCE 7-22 Table 12.8-2 (from memory)"
           sx={{ maxWidth: 420 }}
         >
           {PERIOD_SYSTEMS.map((s) => (
             <MenuItem key={s.label} value={s.label}>
-              {s.label} (Ct {s.ct}, x {s.x})
+              {s.label} (Ct {Number(ctToDisplay(units, s.ct, s.x).toPrecision(3))}, x {s.x})
             </MenuItem>
           ))}
         </TextField>
@@ -99,13 +135,16 @@ export function BasisForm({
             select={Boolean(field.options)}
             size="small"
             name={field.name}
-            label={field.label}
+            label={fieldLabel(field, units)}
             value={form.values[field.name] ?? ''}
             onChange={form.handleChange}
             onBlur={form.handleBlur}
             error={Boolean(form.touched[field.name] && form.errors[field.name])}
-            helperText={(form.touched[field.name] && form.errors[field.name]) || field.clause}
-            disabled={readOnly}
+            helperText={
+              (form.touched[field.name] && form.errors[field.name]) ||
+              (fixed.has(field.name) ? `${field.clause}; from the design spectrum` : field.clause)
+            }
+            disabled={readOnly || fixed.has(field.name)}
             sx={{ width: 200 }}
           >
             {field.options?.map((o) => (
@@ -120,7 +159,7 @@ export function BasisForm({
         <TextField
           size="small"
           name={PER_LEVEL[code].name}
-          label={PER_LEVEL[code].label}
+          label={perLevelLabel(code, units)}
           placeholder={
             code === 'ASCE7-22' ? 'Blank: each storey mass x g' : 'Blank: the storey masses'
           }
@@ -135,6 +174,26 @@ export function BasisForm({
           disabled={readOnly}
           fullWidth
         />
+      )}
+      {fromSpectrum.length > 0 && (
+        <Typography variant="body2" data-testid="basis-from-spectrum">
+          From the design spectrum:{' '}
+          {fromSpectrum
+            .map((v) => `${v.label} ${shown(v.value)}${v.unit ? ` ${v.unit}` : ''}`)
+            .join(', ')}
+          . Generate the spectrum again to change them.
+        </Typography>
+      )}
+      {mismatches.length > 0 && (
+        <Alert severity="warning" role="alert" aria-label="Basis and spectrum disagree">
+          <AlertTitle>The saved basis and the design spectrum disagree</AlertTitle>
+          {mismatches.map((m) => (
+            <div key={m}>{m}</div>
+          ))}
+          {!readOnly && fromSpectrum.length > 0 && (
+            <div>Save the basis to take the spectrum&apos;s values.</div>
+          )}
+        </Alert>
       )}
       {!readOnly && (
         <div>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fromBasis, perLevel, toBasis } from './basis-schema';
+import { ctToDisplay, fromBasis, perLevel, perLevelLabel, toBasis } from './basis-schema';
 
 describe('the code basis form values', () => {
   it('reads a per-level list, storey 1 first, and refuses a wrong count or a bad value', () => {
@@ -21,5 +21,25 @@ describe('the code basis form values', () => {
   it('keeps the EN 1998-1 spectrum type a number and the ground type a letter', () => {
     const basis = toBasis(fromBasis(null, 'EN1998-1'), 3);
     expect(basis).toMatchObject({ code: 'EN1998-1', spectrumType: 1, groundType: 'C' });
+  });
+
+  it('shows Ct and the per-level list in US units, and saves them in SI', () => {
+    // ASCE 7-22 Table 12.8-2 gives Ct = 0.0466 (SI) and 0.016 (US) for concrete moment
+    // frames, x = 0.9: Ct(US) = Ct(SI) x 0.3048^x (common practice).
+    expect(ctToDisplay('US', 0.0466, 0.9)).toBeCloseTo(0.016, 3);
+    expect(ctToDisplay('SI', 0.0466, 0.9)).toBe(0.0466);
+    const si = {
+      ...(fromBasis(null, 'ASCE7-22') as object),
+      seismicWeights: [4448.2216152605 * 100, 4448.2216152605 * 250],
+    };
+    const shown = fromBasis(si as never, 'ASCE7-22', 'US');
+    expect(shown.seismicWeights).toBe('100, 250');
+    expect(Number(shown.ct)).toBeCloseTo(0.016, 3);
+    const back = toBasis(shown, 2, 'US') as { ct: number; seismicWeights: number[] };
+    expect(back.ct).toBeCloseTo(0.0466, 6);
+    expect(back.seismicWeights[1]).toBeCloseTo(4448.2216152605 * 250, 3);
+    expect(perLevelLabel('ASCE7-22', 'US')).toBe('Seismic weight per level (kip)');
+    expect(perLevelLabel('ASCE7-22', 'SI')).toBe('Seismic weight per level (kN)');
+    expect(perLevelLabel('EN1998-1', 'SI')).toBe('Seismic mass per level (t)');
   });
 });

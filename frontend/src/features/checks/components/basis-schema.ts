@@ -1,5 +1,6 @@
 import type { CodeBasisParameters } from '@tiermode/shared-types';
 import * as yup from 'yup';
+import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 
 /** The form's values: every field as typed text, the code choosing which are used. */
 export interface BasisFormValues {
@@ -31,7 +32,7 @@ export const FIELDS: Record<CodeBasisParameters['code'], BasisField[]> = {
       label: 'Omega0',
       clause: 'Table 12.2-1 (recorded; not used by these checks)',
     },
-    { name: 'ct', label: 'Ct (SI)', clause: 'Table 12.8-2' },
+    { name: 'ct', label: 'Ct', clause: 'Table 12.8-2' },
     { name: 'x', label: 'x', clause: 'Table 12.8-2' },
     {
       name: 'riskCategory',
@@ -94,11 +95,43 @@ export function basisSchema(code: CodeBasisParameters['code']) {
   return yup.object(shape);
 }
 
-/** The optional per-level list of each basis: its field, label and factor to SI. */
+/**
+ * The optional per-level list of each basis: its field, and how a value shows in the chosen
+ * units (ASCE 7 weights as forces; EN 1998-1 masses as masses, which US units show as weights).
+ */
 export const PER_LEVEL = {
-  'ASCE7-22': { name: 'seismicWeights', label: 'Seismic weight per level (kN)', toSi: 1000 },
-  'EN1998-1': { name: 'seismicMasses', label: 'Seismic mass per level (t)', toSi: 1000 },
+  'ASCE7-22': { name: 'seismicWeights', quantity: 'force' },
+  'EN1998-1': { name: 'seismicMasses', quantity: 'mass' },
 } as const;
+
+/** The per-level list's label in the chosen units. */
+export function perLevelLabel(code: 'ASCE7-22' | 'EN1998-1', units: UnitSystem): string {
+  return code === 'ASCE7-22'
+    ? `Seismic weight per level (${unitLabel(units, 'force')})`
+    : units === 'US'
+      ? `Seismic weight per level (${unitLabel(units, 'mass')})`
+      : `Seismic mass per level (${unitLabel(units, 'mass')})`;
+}
+
+/** 1 ft = 0.3048 m exactly (international foot). */
+const FOOT = 0.3048;
+
+/**
+ * Ct as the chosen units give it: Ta = Ct hn^x with hn in m (SI) or ft (US), so
+ * Ct(US) = Ct(SI) x 0.3048^x (ASCE 7-22 Table 12.8-2 gives both; common practice).
+ */
+export function ctToDisplay(units: UnitSystem, ctSi: number, x: number): number {
+  return units === 'US' ? ctSi * FOOT ** x : ctSi;
+}
+
+export function ctFromDisplay(units: UnitSystem, shown: number, x: number): number {
+  return units === 'US' ? shown / FOOT ** x : shown;
+}
+
+/** A field's label in the chosen units (Ct names the unit of hn it takes). */
+export function fieldLabel(field: BasisField, units: UnitSystem): string {
+  return field.name === 'ct' ? `Ct (hn in ${unitLabel(units, 'length')})` : field.label;
+}
 
 /** "1200, 1150, 980" as numbers, or null when blank; throws a message naming the problem. */
 export function perLevel(text: string, storeys: number): number[] | null {
@@ -114,17 +147,24 @@ export function perLevel(text: string, storeys: number): number[] | null {
   return values;
 }
 
-/** The typed values as the API takes them. */
-export function toBasis(values: BasisFormValues, storeys: number): CodeBasisParameters {
+/** The typed values, in the chosen units, as the API takes them (SI). */
+export function toBasis(
+  values: BasisFormValues,
+  storeys: number,
+  units: UnitSystem = 'SI',
+): CodeBasisParameters {
   const out: Record<string, unknown> = { code: values.code };
   const list = values.code === 'USER' ? null : PER_LEVEL[values.code];
   if (list) {
     const parsed = perLevel(values[list.name] ?? '', storeys);
-    if (parsed) out[list.name] = parsed.map((v) => v * list.toSi);
+    if (parsed) out[list.name] = parsed.map((v) => fromDisplay(units, list.quantity, v));
   }
   for (const field of FIELDS[values.code]) {
     const text = values[field.name];
     out[field.name] = field.options && field.name !== 'spectrumType' ? text : Number(text);
+  }
+  if (values.code === 'ASCE7-22') {
+    out.ct = ctFromDisplay(units, Number(values.ct), Number(values.x));
   }
   return out as unknown as CodeBasisParameters;
 }
@@ -132,6 +172,7 @@ export function toBasis(values: BasisFormValues, storeys: number): CodeBasisPara
 export function fromBasis(
   basis: CodeBasisParameters | null,
   code: CodeBasisParameters['code'],
+  units: UnitSystem = 'SI',
 ): BasisFormValues {
   const values: BasisFormValues = { code };
   const source =
@@ -145,8 +186,15 @@ export function fromBasis(
     const list = PER_LEVEL[code];
     const given = source[list.name];
     values[list.name] = Array.isArray(given)
-      ? given.map((v) => Number((Number(v) / list.toSi).toPrecision(8))).join(', ')
+      ? given
+          .map((v) => Number(toDisplay(units, list.quantity, Number(v)).toPrecision(8)))
+          .join(', ')
       : '';
+  }
+  if (code === 'ASCE7-22') {
+    const ct = Number(source.ct);
+    const x = Number(source.x);
+    values.ct = String(Number(ctToDisplay(units, ct, x).toPrecision(6)));
   }
   return values;
 }

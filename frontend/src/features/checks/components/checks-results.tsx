@@ -11,7 +11,8 @@ import {
   TableRow,
   Typography,
 } from '@mui/material';
-import type { ChecksResponse, StoreyInput } from '@tiermode/shared-types';
+import type { AnalysisResponse, ChecksResponse, StoreyInput } from '@tiermode/shared-types';
+import { DesignStoreyTable } from './design-storey-table';
 import { Scatter } from 'react-chartjs-2';
 import { SERIES_COLOURS, STATIC_CHART } from '@/lib/charts';
 import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
@@ -23,10 +24,13 @@ const PASS = (ok: boolean) => (
 /** The checks stored with the analysis: ELF comparison, storey drifts and stability, flags. */
 export function ChecksResults({
   checks,
+  analysis,
   storeys,
   units,
 }: {
   checks: ChecksResponse;
+  /** The analysis the checks were made with, for the elastic values beside the design ones. */
+  analysis: AnalysisResponse;
   storeys: StoreyInput[];
   units: UnitSystem;
 }) {
@@ -46,6 +50,14 @@ export function ChecksResults({
   const failing = checks.storeys.filter((s) => !s.driftOk).map((s) => s.storey);
   return (
     <Stack spacing={2}>
+      {(checks.warnings ?? []).length > 0 && (
+        <Alert severity="warning" role="alert" aria-label="Checks warnings">
+          <AlertTitle>Check the basis before relying on these checks</AlertTitle>
+          {(checks.warnings ?? []).map((w) => (
+            <div key={w}>{w}</div>
+          ))}
+        </Alert>
+      )}
       <Alert severity="info" role="note" aria-label="About the checks">
         <AlertTitle>The checks follow the named clauses as the software reads them</AlertTitle>
         The engineer of record confirms that they apply under the locally adopted code, and checks
@@ -94,6 +106,24 @@ export function ChecksResults({
             </TableRow>
           </TableBody>
         </Table>
+      </Box>
+      <Box component="section" aria-label="Storey values for design">
+        <Typography variant="h3" gutterBottom>
+          Storey values for design
+        </Typography>
+        {checks.design ? (
+          <DesignStoreyTable
+            design={checks.design}
+            combined={analysis.combined[checks.design.combination]}
+            combination={checks.design.combination}
+            storeys={storeys}
+            units={units}
+          />
+        ) : (
+          <Alert severity="info">
+            These checks were stored before design storey values existed: analyse again to see them.
+          </Alert>
+        )}
       </Box>
       <Box component="section" aria-label="Storey drift and stability">
         <Typography variant="h3" gutterBottom>

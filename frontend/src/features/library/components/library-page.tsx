@@ -4,6 +4,7 @@ import {
   CODE_BASES,
   CODE_BASIS_LABELS,
   type CodeBasis,
+  formatDate,
   type LibraryEntryDto,
 } from '@tiermode/shared-types';
 import { useMemo, useState } from 'react';
@@ -33,7 +34,7 @@ const columns: GridColDef<LibraryEntryDto>[] = [
     field: 'lockedAt',
     headerName: 'Locked',
     width: 120,
-    valueFormatter: (value: string) => new Date(value).toLocaleDateString(),
+    valueFormatter: (value: string) => formatDate(value),
   },
 ];
 

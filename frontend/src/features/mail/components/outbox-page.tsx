@@ -1,3 +1,4 @@
+import { formatDateTime } from '@tiermode/shared-types';
 import { Alert, Box, Card, CardContent, Chip, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import type { MailMessageDto } from '@tiermode/shared-types';
@@ -17,7 +18,7 @@ const columns: GridColDef<MailMessageDto>[] = [
     field: 'createdAt',
     headerName: 'When',
     width: 180,
-    valueFormatter: (value: string) => new Date(value).toLocaleString(),
+    valueFormatter: (value: string) => formatDateTime(value),
   },
   { field: 'to', headerName: 'To', flex: 1, minWidth: 200 },
   { field: 'subject', headerName: 'Subject', flex: 3, minWidth: 320 },

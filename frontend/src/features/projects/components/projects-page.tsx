@@ -12,7 +12,7 @@ import {
   Typography,
 } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
-import { CODE_BASIS_LABELS, type ProjectDto } from '@tiermode/shared-types';
+import { CODE_BASIS_LABELS, formatDate, type ProjectDto } from '@tiermode/shared-types';
 import { useFormik } from 'formik';
 import { useState } from 'react';
 import { Link as RouterLink, useNavigate } from 'react-router';
@@ -52,7 +52,7 @@ const columns: GridColDef<ProjectDto>[] = [
     field: 'updatedAt',
     headerName: 'Last change',
     width: 130,
-    valueFormatter: (value: string) => new Date(value).toLocaleDateString(),
+    valueFormatter: (value: string) => formatDate(value),
   },
 ];
 

@@ -10,6 +10,7 @@ import { ModeShapeChart } from './mode-shape-chart';
 import { ImplausibleResultsAlert } from './implausible-results-alert';
 import { ModesTable } from './modes-table';
 import { ResponseProfiles } from './response-profiles';
+import { StoreyResponsesTable } from './storey-responses-table';
 
 export function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -65,6 +66,10 @@ export function AnalysisResults({
           elevations={levels.slice(0, result.combined.cqc.storeyShear.length)}
           units={units}
         />
+        <Typography variant="h3" sx={{ mt: 2 }} gutterBottom>
+          Storey by storey
+        </Typography>
+        <StoreyResponsesTable result={result} storeys={storeys} units={units} />
         <Typography variant="h3" sx={{ mt: 2 }} gutterBottom>
           Correlation coefficients (CQC)
         </Typography>

@@ -10,10 +10,12 @@ interface Props {
   units: UnitSystem;
 }
 
+// CQC and SRSS often agree to the pixel: CQC is drawn first, wide and solid, and SRSS on top of
+// it, narrow and dashed, so each stays visible where they coincide; ABS is long-dashed.
 const METHODS = [
-  { key: 'srss', label: 'SRSS', dash: [] as number[] },
-  { key: 'cqc', label: 'CQC', dash: [] as number[] },
-  { key: 'abs', label: 'ABS (upper bound)', dash: [6, 4] },
+  { key: 'cqc', label: 'CQC', dash: [] as number[], width: 5, colour: 1 },
+  { key: 'srss', label: 'SRSS', dash: [5, 5] as number[], width: 2, colour: 0 },
+  { key: 'abs', label: 'ABS (upper bound)', dash: [12, 4] as number[], width: 2, colour: 2 },
 ] as const;
 
 type Profile = {
@@ -82,15 +84,15 @@ export function ResponseProfiles({ result, elevations, units }: Props) {
                   plugins: { legend: { position: 'bottom' }, title: { display: false } },
                 }}
                 data={{
-                  datasets: METHODS.map((m, i) => ({
+                  datasets: METHODS.map((m) => ({
                     label: m.label,
                     data: points(result.combined[m.key][profile.field], profile),
                     showLine: true,
-                    borderColor: SERIES_COLOURS[i],
-                    backgroundColor: SERIES_COLOURS[i],
+                    borderColor: SERIES_COLOURS[m.colour],
+                    backgroundColor: SERIES_COLOURS[m.colour],
                     borderDash: [...m.dash],
                     pointRadius: 0,
-                    borderWidth: 2,
+                    borderWidth: m.width,
                   })),
                 }}
               />
