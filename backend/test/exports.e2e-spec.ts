@@ -1,7 +1,7 @@
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import type { CalculationDto, CalculationExport } from '@tiermode/shared-types';
-import { binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
+import { ASCE_BASIS, binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
 
 const { http, as } = useSignedInApp();
 
@@ -31,7 +31,7 @@ describe('Exports', () => {
 
   it('writes the modes as CSV, one row per mode, in the stated units', async () => {
     const res = await http()
-      .get(`/api/calculations/${calc.id}/results.csv?table=modes`)
+      .get(`/api/calculations/${calc.id}/results.csv?table=modes&units=SI`)
       .set(as('designer'))
       .expect(200)
       .expect('Content-Type', /text\/csv/)
@@ -39,13 +39,58 @@ describe('Exports', () => {
     const rows = Papa.parse<string[]>(res.text.trim()).data;
     expect(rows[0]).toEqual(expect.arrayContaining(['Period (s)', 'Effective modal mass (t)']));
     expect(rows).toHaveLength(1 + calc.analysis!.modes.length);
-    expect(Number(rows[1][1])).toBe(calc.analysis!.modes[0].period);
-    expect(Number(rows[1][5])).toBeCloseTo(calc.analysis!.modes[0].effectiveMass / 1000, 9);
+    // Six significant figures, not the binary tail of the double.
+    expect(rows[1][1]).toBe(String(Number(calc.analysis!.modes[0].period.toPrecision(6))));
+    expect(Number(rows[1][5])).toBe(
+      Number((calc.analysis!.modes[0].effectiveMass / 1000).toPrecision(6)),
+    );
+    for (const row of rows.slice(1)) {
+      for (const cell of row) {
+        const digits = cell.replace(/^-?0*\.?0*/, '').replace(/[.e].*$|\./g, '');
+        expect(digits.length).toBeLessThanOrEqual(6);
+      }
+    }
+  });
+
+  it("writes US customary units when asked, and the calc's own units by default", async () => {
+    const us = async (query: string) =>
+      Papa.parse<string[]>(
+        (
+          await http()
+            .get(`/api/calculations/${calc.id}/results.csv?${query}`)
+            .set(as('designer'))
+            .expect(200)
+        ).text.trim(),
+      ).data;
+    const modes = await us('table=modes&units=US');
+    expect(modes[0]).toContain('Effective modal weight (kip)');
+    // Weight = m g with g = 9.80665 m/s^2; 1 kip = 4448.2216152605 N (NIST SP 811, B.8).
+    const kip = (calc.analysis!.modes[0].effectiveMass * 9.80665) / 4448.2216152605;
+    expect(Number(modes[1][5])).toBe(Number(kip.toPrecision(6)));
+    const combined = await us('table=combined&units=US');
+    expect(combined[0]).toEqual(
+      expect.arrayContaining([
+        'Displacement (in)',
+        'Storey shear (kip)',
+        'Overturning moment (kip·ft)',
+      ]),
+    );
+    const base = combined.find((r) => r[0] === 'CQC' && r[1] === 'Base')!;
+    // 1 kip·ft = 4448.2216152605 N x 0.3048 m (NIST SP 811, B.8).
+    const kipFt = calc.analysis!.combined.cqc.baseMoment / (4448.2216152605 * 0.3048);
+    expect(Number(base[7])).toBe(Number(kipFt.toPrecision(6)));
+    // The calc is kept in US units: without the query, the file is in them.
+    expect(await us('table=combined')).toEqual(combined);
+    const bad = await http()
+      .get(`/api/calculations/${calc.id}/results.csv?table=modes&units=metric`)
+      .set(as('designer'))
+      .expect(400);
+    expect(bad.body.message).toEqual(['units must be one of SI, US']);
   });
 
   it('escapes text cells that a spreadsheet would read as formulas, in CSV and XLSX', async () => {
     const csv = await http()
-      .get(`/api/calculations/${calc.id}/results.csv?table=combined`)
+      .get(`/api/calculations/${calc.id}/results.csv?table=combined&units=SI`)
       .set(as('designer'))
       .expect(200);
     const rows = Papa.parse<string[]>(csv.text.trim()).data;
@@ -56,7 +101,9 @@ describe('Exports', () => {
     expect(labels.some((l) => /^[=+\-@]/.test(l))).toBe(false);
     // Base shear of CQC, in kN, as the API gives it in N.
     const base = rows.find((r) => r[0] === 'CQC' && r[1] === 'Base')!;
-    expect(Number(base[6])).toBeCloseTo(calc.analysis!.combined.cqc.baseShear / 1000, 9);
+    expect(Number(base[6])).toBe(
+      Number((calc.analysis!.combined.cqc.baseShear / 1000).toPrecision(6)),
+    );
 
     const xlsx = await http()
       .get(`/api/calculations/${calc.id}/results.xlsx`)
@@ -83,7 +130,12 @@ describe('Exports', () => {
       .get(`/api/calculations/${calc.id}/results.csv?table=everything`)
       .set(as('designer'))
       .expect(400);
-    expect(bad.body.message).toEqual(['table must be one of modes, modal, combined']);
+    expect(bad.body.message).toEqual(['table must be one of modes, modal, combined, design']);
+    const design = await http()
+      .get(`/api/calculations/${calc.id}/results.csv?table=design`)
+      .set(as('designer'))
+      .expect(409);
+    expect(design.body.message[0]).toContain('no current code-basis checks');
     const fresh = await http()
       .post(`/api/projects/${projectId}/calculations`)
       .set(as('designer'))
@@ -95,6 +147,49 @@ describe('Exports', () => {
     expect(res.body.message).toEqual([
       'This calculation has not been analysed yet: nothing to export',
     ]);
+  });
+
+  it('exports the design storey values beside the elastic ones once the checks are made', async () => {
+    const current = await http().get(`/api/calculations/${calc.id}`).set(as('designer'));
+    await http()
+      .patch(`/api/calculations/${calc.id}`)
+      .set(as('designer'))
+      .send({ version: current.body.version, basis: ASCE_BASIS })
+      .expect(200);
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    const checked = (await http().get(`/api/calculations/${calc.id}`).set(as('designer')))
+      .body as CalculationDto;
+    const rows = Papa.parse<string[]>(
+      (
+        await http()
+          .get(`/api/calculations/${calc.id}/results.csv?table=design&units=SI`)
+          .set(as('designer'))
+          .expect(200)
+      ).text.trim(),
+    ).data;
+    expect(rows[0]).toEqual(
+      expect.arrayContaining(['Storey shear, elastic (kN)', 'Storey shear, design (kN)']),
+    );
+    const at = rows[0].indexOf('Storey shear, design (kN)');
+    expect(Number(rows[1][at])).toBe(
+      Number((checked.checks!.design!.storeyShear[0] / 1000).toPrecision(6)),
+    );
+    expect(Number(rows[1][at - 1])).toBe(
+      Number((checked.analysis!.combined.cqc.storeyShear[0] / 1000).toPrecision(6)),
+    );
+    const xlsx = await http()
+      .get(`/api/calculations/${calc.id}/results.xlsx`)
+      .set(as('designer'))
+      .buffer(true)
+      .parse(binaryBody)
+      .expect(200);
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load(xlsx.body as ExcelJS.Buffer);
+    expect(book.worksheets.map((w) => w.name)).toContain('Design storey values');
+    // The calc is kept in US units: the workbook is in them.
+    expect(book.getWorksheet('Design storey values')!.getRow(1).values).toContain(
+      'Storey shear, design (kip)',
+    );
   });
 
   it('exports the whole calc as JSON that re-imports to identical inputs', async () => {

@@ -96,4 +96,33 @@ describe('the calc package of a calc with checks', () => {
     expect(text).toContain('forces 1.100');
     expect(text).toMatch(/EXCEEDS/);
   });
+
+  it('is written in the units asked for, with the spectrum source and the design storey values', async () => {
+    const list = await http().get('/api/calculations?status=draft').set(as('designer')).expect(200);
+    const draft = (list.body as { id: string; title: string }[]).find((c) =>
+      c.title.startsWith('Loading-dock'),
+    )!;
+    const pdf = await http()
+      .get(`/api/calculations/${draft.id}/report.pdf?units=US`)
+      .set(as('designer'))
+      .buffer(true)
+      .parse(binaryBody)
+      .expect(200);
+    const { text } = await pdfText(pdf.body as Buffer);
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Seismic weight (kip)');
+    expect(flat).toContain('Storey shear (kip)');
+    expect(flat).not.toContain('(kN)');
+    expect(flat).toContain(
+      'Source: ASCE 7 two-period (11.4.6): SDS 0.8 g, SD1 0.45 g, TL 6 s, S1 0.4 g.',
+    );
+    expect(flat).toContain('Storey values for design (CQC)');
+    expect(flat).toContain('elastic');
+    expect(flat).toContain('Combined responses (SRSS), storey by storey');
+    expect(flat).toContain('Mode 1 alone');
+    await http()
+      .get(`/api/calculations/${draft.id}/report.pdf?units=imperial`)
+      .set(as('designer'))
+      .expect(400);
+  });
 });

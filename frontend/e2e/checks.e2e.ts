@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
+import { analyse } from './support/calc-page';
 
 const CALC = 'Loading-dock storey study, north-south';
 
@@ -22,8 +23,7 @@ const FROM_SPECTRUM: Record<string, string> = {
 };
 
 async function analyseAndOpenChecks(page: Page) {
-  await page.getByRole('button', { name: /^(Save and analyse|Analyse)$/ }).click();
-  await page.getByRole('table', { name: 'Modes' }).waitFor();
+  await analyse(page);
   await page.getByRole('tab', { name: 'Checks' }).click();
   await page.getByRole('table', { name: 'Storey checks' }).waitFor();
 }

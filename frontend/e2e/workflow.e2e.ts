@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn, type DemoRole } from './support/browser';
+import { analyse, editStorey, nav } from './support/calc-page';
 
 // An invented project for this journey; every name and number is made up.
 const PROJECT = 'Birch Row offices';
@@ -16,9 +17,6 @@ async function as<T>(browser: Browser, role: DemoRole, job: (page: Page) => Prom
   return result;
 }
 
-const nav = (page: Page, name: string) =>
-  page.getByRole('navigation').getByRole('link', { name }).click();
-
 async function openTab(page: Page, name: string) {
   await page.getByRole('tab', { name }).click();
 }
@@ -26,23 +24,6 @@ async function openTab(page: Page, name: string) {
 async function openFromDashboard(page: Page, list: string) {
   await page.getByRole('grid', { name: list }).getByRole('link', { name: CALC }).click();
   await page.getByRole('heading', { name: CALC }).waitFor();
-}
-
-async function editMass(page: Page, storey: number, tonnes: string) {
-  const row = page
-    .getByRole('grid', { name: 'Storey table' })
-    .getByRole('row')
-    .filter({ has: page.getByRole('gridcell', { name: String(storey), exact: true }) });
-  const cell = row.locator('[data-field="mass"]');
-  await cell.dblclick();
-  await cell.locator('input').fill(tonnes);
-  await cell.locator('input').press('Enter');
-}
-
-async function saveAndAnalyse(page: Page) {
-  await page.getByRole('button', { name: 'Save and analyse' }).click();
-  await page.getByRole('table', { name: 'Modes' }).waitFor();
-  await expect.poll(() => page.getByRole('status').first().textContent()).toBe('All changes saved');
 }
 
 describe('The review workflow, across the four roles', () => {
@@ -84,7 +65,7 @@ describe('The review workflow, across the four roles', () => {
       await page.getByRole('note', { name: 'Preliminary' }).waitFor();
       expect(await page.getByTestId('preliminary-watermark').count()).toBe(1);
 
-      await editMass(page, 2, '455');
+      await editStorey(page, 2, 'mass', '455');
       await expect
         .poll(() => page.getByRole('status').first().textContent())
         .toBe('Unsaved changes');
@@ -92,7 +73,7 @@ describe('The review workflow, across the four roles', () => {
       // The calc is kept in US customary units for this office; values stay SI on the server.
       await page.getByRole('button', { name: 'US (kip, ft, in)' }).click();
       await page.getByRole('columnheader', { name: /Seismic weight \(kip/ }).waitFor();
-      await saveAndAnalyse(page);
+      await analyse(page);
       await screenshot(page, 'workflow-03-results');
 
       await openTab(page, 'Review');
@@ -172,11 +153,11 @@ describe('The review workflow, across the four roles', () => {
       await openTab(page, 'Storey table');
       // The calc is kept in US units now: 880 kip of seismic weight is about 399 t.
       await page.getByRole('columnheader', { name: /Seismic weight \(kip/ }).waitFor();
-      await editMass(page, 2, '880');
+      await editStorey(page, 2, 'mass', '880');
       // Submitting needs the edits saved and analysed first; the page says so.
       await openTab(page, 'Review');
       await page.getByText('Save your changes first.').waitFor();
-      await saveAndAnalyse(page);
+      await analyse(page);
       await openTab(page, 'Review');
       await page.getByRole('button', { name: 'Submit for review' }).click();
       await page.getByText('Submitted for review: waiting for a reviewer.').waitFor();

@@ -12,3 +12,4 @@ export * from './number-format';
 export * from './spectrum-source';
 export * from './spectrum-table';
 export * from './dates';
+export * from './units';

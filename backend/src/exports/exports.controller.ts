@@ -9,7 +9,13 @@ import {
   Query,
   StreamableFile,
 } from '@nestjs/common';
-import type { CalculationDto, CalculationExport } from '@tiermode/shared-types';
+import {
+  describeSpectrumSource,
+  formatDateTime,
+  type CalculationDto,
+  type CalculationExport,
+} from '@tiermode/shared-types';
+import { exportUnits } from './export-units';
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import type { AppAbility } from '../authorization/app-ability';
@@ -26,7 +32,14 @@ import { XLSX_TYPE } from '../imports/templates';
 import { ApiContract } from '../openapi/api-contract.decorator';
 import { Expensive } from '../rate-limit/expensive.decorator';
 
-const TABLES = { modes: 0, modal: 1, combined: 2 } as const;
+const TABLES = ['modes', 'modal', 'combined', 'design'] as const;
+type TableName = (typeof TABLES)[number];
+const TABLE_NAMES: Record<TableName, string> = {
+  modes: 'Modes',
+  modal: 'Modal responses',
+  combined: 'Combined responses',
+  design: 'Design storey values',
+};
 
 /** A file name from a title: letters, digits and dashes only. */
 const fileName = (calc: CalculationDto, suffix: string) =>
@@ -39,16 +52,20 @@ const safeRows = (table: Table) => table.rows.map((row) => row.map(spreadsheetSa
 export class ExportsController {
   constructor(private readonly calculations: CalculationsService) {}
 
-  private async analysed(ability: AppAbility, id: string) {
+  private async analysed(ability: AppAbility, id: string, units: string | undefined) {
     const calc = await this.calculations.get(ability, id);
     if (!calc.analysis) {
       throw new ConflictException('This calculation has not been analysed yet: nothing to export');
     }
-    return { calc, tables: resultTables(calc.inputs, calc.analysis) };
+    // Checks older than the inputs are not exported as design values.
+    const checks = calc.analysisStale ? null : calc.checks;
+    const shown = exportUnits(units, calc);
+    return { calc, shown, tables: resultTables(calc.inputs, calc.analysis, shown, checks) };
   }
 
   @ApiContract({
-    summary: 'One results table as CSV (table=modes, modal or combined)',
+    summary:
+      'One results table as CSV (table=modes, modal, combined or design; units=SI or US, default the calc’s own)',
     file: 'text/csv',
   })
   @Get('calculations/:id/results.csv')
@@ -57,12 +74,18 @@ export class ExportsController {
     @CurrentAbility() ability: AppAbility,
     @Param('id', UuidParam('id')) id: string,
     @Query('table') table?: string,
+    @Query('units') units?: string,
   ): Promise<StreamableFile> {
-    if (!table || !(table in TABLES)) {
-      throw new BadRequestException(['table must be one of modes, modal, combined']);
+    if (!table || !TABLES.includes(table as TableName)) {
+      throw new BadRequestException([`table must be one of ${TABLES.join(', ')}`]);
     }
-    const { calc, tables } = await this.analysed(ability, id);
-    const chosen = tables[TABLES[table as keyof typeof TABLES]];
+    const { calc, tables } = await this.analysed(ability, id, units);
+    const chosen = tables.find((t) => t.name === TABLE_NAMES[table as TableName]);
+    if (!chosen) {
+      throw new ConflictException(
+        'This calculation has no current code-basis checks, so no design values: set a basis and analyse',
+      );
+    }
     const csv = Papa.unparse({ fields: chosen.headers, data: safeRows(chosen) }) + '\r\n';
     return new StreamableFile(Buffer.from(csv, 'utf8'), {
       type: 'text/csv; charset=utf-8',
@@ -70,14 +93,18 @@ export class ExportsController {
     });
   }
 
-  @ApiContract({ summary: 'The results tables as an XLSX workbook', file: XLSX_TYPE })
+  @ApiContract({
+    summary: 'The results tables as an XLSX workbook (units=SI or US, default the calc’s own)',
+    file: XLSX_TYPE,
+  })
   @Get('calculations/:id/results.xlsx')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   async resultsXlsx(
     @CurrentAbility() ability: AppAbility,
     @Param('id', UuidParam('id')) id: string,
+    @Query('units') units?: string,
   ): Promise<StreamableFile> {
-    const { calc, tables } = await this.analysed(ability, id);
+    const { calc, tables, shown } = await this.analysed(ability, id, units);
     const workbook = new ExcelJS.Workbook();
     workbook.creator = 'Tiermode';
     for (const table of tables) {
@@ -88,11 +115,15 @@ export class ExportsController {
     }
     const about = workbook.addWorksheet('About');
     about.addRow([`${calc.title}, revision ${calc.revision} (${calc.status})`]);
-    about.addRow([`Engine ${calc.engineVersion ?? ''}; analysed ${calc.analysedAt ?? ''}`]);
+    about.addRow([
+      `Engine ${calc.engineVersion ?? ''}; analysed ${formatDateTime(calc.analysedAt)}`,
+    ]);
     about.addRow([calc.seal ? `Seal (SHA-256): ${calc.seal.hash}` : 'Preliminary: not locked']);
     about.addRow([
       'The locally adopted building code governs; the engineer of record must accept these results.',
     ]);
+    about.addRow([`Design spectrum: ${describeSpectrumSource(calc.inputs.spectrum.source)}`]);
+    about.addRow([`Units: ${shown === 'US' ? 'US customary (kip, ft, in)' : 'SI (t, kN, m, mm)'}`]);
     return new StreamableFile(Buffer.from(await workbook.xlsx.writeBuffer()), {
       type: XLSX_TYPE,
       disposition: `attachment; filename="${fileName(calc, 'results.xlsx')}"`,

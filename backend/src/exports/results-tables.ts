@@ -1,4 +1,12 @@
-import type { AnalysisResponse, CalculationInputs } from '@tiermode/shared-types';
+import {
+  toDisplay,
+  unitLabel,
+  type AnalysisResponse,
+  type CalculationInputs,
+  type ChecksResponse,
+  type Quantity,
+  type UnitSystem,
+} from '@tiermode/shared-types';
 
 export interface Table {
   name: string;
@@ -6,18 +14,31 @@ export interface Table {
   rows: (string | number | null)[][];
 }
 
-// Results are exported in the SI units the screens use: t, kN, kN*m, mm.
-const T = 1e-3;
-const KN = 1e-3;
-const MM = 1e3;
+/**
+ * Six significant figures: every digit an engineer can use from a result (the engine's own
+ * accuracy is far finer, the inputs' far coarser), without the binary tail of 0.899999999341419.
+ */
+export const SIGNIFICANT = 6;
+const sig = (value: number) =>
+  Number.isFinite(value) ? Number(value.toPrecision(SIGNIFICANT)) : null;
 
 const labelOf = (inputs: CalculationInputs, i: number) => inputs.storeys[i]?.label ?? '';
 
 /**
- * The stored results as three tables: the modes, each mode's responses storey by storey, and
- * the combined responses (SRSS, CQC, ABS) with the base shear and moment.
+ * The stored results as tables, in the chosen units: the modes, each mode's responses storey by
+ * storey, the combined responses (SRSS, CQC, ABS) with the base shear and moment, and, where the
+ * checks were made, the design storey values beside the elastic ones.
  */
-export function resultTables(inputs: CalculationInputs, analysis: AnalysisResponse): Table[] {
+export function resultTables(
+  inputs: CalculationInputs,
+  analysis: AnalysisResponse,
+  units: UnitSystem,
+  checks: ChecksResponse | null = null,
+): Table[] {
+  const show = (quantity: Quantity, si: number) => sig(toDisplay(units, quantity, si));
+  const u = (quantity: Quantity) => unitLabel(units, quantity);
+  // US customary units show a mass as its weight (kip), as the storey table does.
+  const massTitle = units === 'US' ? 'Effective modal weight' : 'Effective modal mass';
   const modes: Table = {
     name: 'Modes',
     headers: [
@@ -26,7 +47,7 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
       'Frequency (Hz)',
       'Circular frequency (rad/s)',
       'Participation factor (shape +1 at the level in the last column)',
-      'Effective modal mass (t)',
+      `${massTitle} (${u('mass')})`,
       'Effective mass ratio (%)',
       'Cumulative mass ratio (%)',
       'Sa (g)',
@@ -34,14 +55,14 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
     ],
     rows: analysis.modes.map((m) => [
       m.number,
-      m.period,
-      m.frequency,
-      m.circularFrequency,
-      m.participationFactor,
-      m.effectiveMass * T,
-      m.effectiveMassRatio * 100,
-      m.cumulativeMassRatio * 100,
-      m.sa,
+      sig(m.period),
+      sig(m.frequency),
+      sig(m.circularFrequency),
+      sig(m.participationFactor),
+      show('mass', m.effectiveMass),
+      sig(m.effectiveMassRatio * 100),
+      sig(m.cumulativeMassRatio * 100),
+      sig(m.sa),
       // The roof unless the roof barely moves in this mode (analyses before engine 1.1: roof).
       m.normalisationLevel ?? inputs.storeys.length,
     ]),
@@ -49,25 +70,25 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
   const storeyHeaders = [
     'Storey',
     'Label',
-    'Displacement (mm)',
-    'Drift (mm)',
-    'Floor force (kN)',
-    'Storey shear (kN)',
-    'Overturning moment (kN*m)',
+    `Displacement (${u('displacement')})`,
+    `Drift (${u('displacement')})`,
+    `Floor force (${u('force')})`,
+    `Storey shear (${u('force')})`,
+    `Overturning moment (${u('moment')})`,
   ];
   const modal: Table = {
     name: 'Modal responses',
     headers: ['Mode', ...storeyHeaders],
     rows: analysis.modes.flatMap((m) =>
-      m.response.displacement.map((u, i) => [
+      m.response.displacement.map((d, i) => [
         m.number,
         i + 1,
         labelOf(inputs, i),
-        u * MM,
-        m.response.drift[i] * MM,
-        m.response.floorForce[i] * KN,
-        m.response.storeyShear[i] * KN,
-        m.response.overturningMoment[i] * KN,
+        show('displacement', d),
+        show('displacement', m.response.drift[i]),
+        show('force', m.response.floorForce[i]),
+        show('force', m.response.storeyShear[i]),
+        show('moment', m.response.overturningMoment[i]),
       ]),
     ),
   };
@@ -80,19 +101,61 @@ export function resultTables(inputs: CalculationInputs, analysis: AnalysisRespon
     name: 'Combined responses',
     headers: ['Combination', ...storeyHeaders, 'Drift ratio'],
     rows: methods.flatMap(([method, r]) => [
-      ...r.displacement.map((u, i) => [
+      ...r.displacement.map((d, i) => [
         method,
         i + 1,
         labelOf(inputs, i),
-        u * MM,
-        r.drift[i] * MM,
-        r.floorForce[i] * KN,
-        r.storeyShear[i] * KN,
-        r.overturningMoment[i] * KN,
-        r.driftRatio[i],
+        show('displacement', d),
+        show('displacement', r.drift[i]),
+        show('force', r.floorForce[i]),
+        show('force', r.storeyShear[i]),
+        show('moment', r.overturningMoment[i]),
+        sig(r.driftRatio[i]),
       ]),
-      [method, 'Base', '', null, null, null, r.baseShear * KN, r.baseMoment * KN, null],
+      [
+        method,
+        'Base',
+        '',
+        null,
+        null,
+        null,
+        show('force', r.baseShear),
+        show('moment', r.baseMoment),
+        null,
+      ],
     ]),
   };
-  return [modes, modal, combined];
+  const tables = [modes, modal, combined];
+  const design = checks?.design;
+  if (design) {
+    const elastic = analysis.combined[design.combination];
+    const left = design.analysisValues === 'elastic' ? 'elastic' : 'design, analysis';
+    const pairs = [
+      ['Floor force', 'force', 'floorForce'],
+      ['Storey shear', 'force', 'storeyShear'],
+      ['Overturning moment', 'moment', 'overturningMoment'],
+      ['Displacement', 'displacement', 'displacement'],
+      ['Drift', 'displacement', 'drift'],
+    ] as const;
+    tables.push({
+      name: 'Design storey values',
+      headers: [
+        'Storey',
+        'Label',
+        ...pairs.flatMap(([title, quantity]) => [
+          `${title}, ${left} (${u(quantity)})`,
+          `${title}, design (${u(quantity)})`,
+        ]),
+      ],
+      rows: inputs.storeys.map((_, i) => [
+        i + 1,
+        labelOf(inputs, i),
+        ...pairs.flatMap(([, quantity, key]) => [
+          show(quantity, elastic[key][i]),
+          show(quantity, design[key][i]),
+        ]),
+      ]),
+    });
+  }
+  return tables;
 }

@@ -1,10 +1,14 @@
 import {
+  describeSpectrumSource,
   shapeNormalisationNote,
+  toDisplay,
+  unitLabel,
   type CalculationDto,
   type CombinedResponse,
   type SealCheckResponse,
+  type UnitSystem,
 } from '@tiermode/shared-types';
-import { formats as f, isoDate } from './formats';
+import { formats as f, inUnits, isoDate, withUnit } from './formats';
 import { lineChart } from './pdf-chart';
 import { finish, heading, MARGIN, newDocument, write, type Doc } from './pdf-kit';
 import { table } from './pdf-table';
@@ -81,7 +85,7 @@ function cover(doc: Doc, calc: CalculationDto, check: SealCheckResponse | null, 
   );
 }
 
-function inputs(doc: Doc, calc: CalculationDto) {
+function inputs(doc: Doc, calc: CalculationDto, units: UnitSystem) {
   const { storeys, spectrum, dampingRatio, modeCount } = calc.inputs;
   heading(doc, 'Inputs: storey table');
   table(
@@ -89,16 +93,20 @@ function inputs(doc: Doc, calc: CalculationDto) {
     [
       { header: 'Storey', width: 50, align: 'right' },
       { header: 'Label', width: 130 },
-      { header: 'Height (m)', width: 90, align: 'right' },
-      { header: 'Mass (t)', width: 100, align: 'right' },
-      { header: 'Stiffness (kN/m)', width: 125, align: 'right' },
+      { header: withUnit(units, 'Height', 'length'), width: 90, align: 'right' },
+      {
+        header: withUnit(units, units === 'US' ? 'Seismic weight' : 'Mass', 'mass'),
+        width: 100,
+        align: 'right',
+      },
+      { header: withUnit(units, 'Stiffness', 'stiffness'), width: 125, align: 'right' },
     ],
     storeys.map((s, i) => [
       String(i + 1),
       s.label ?? '',
-      f.m(s.height),
-      f.t(s.mass),
-      f.kNperM(s.stiffness),
+      inUnits(units, 'length', s.height),
+      inUnits(units, 'mass', s.mass),
+      inUnits(units, 'stiffness', s.stiffness),
     ]),
   );
   write(
@@ -108,6 +116,16 @@ function inputs(doc: Doc, calc: CalculationDto) {
     { width: 495 },
   );
   heading(doc, 'Inputs: design spectrum');
+  write(
+    doc,
+    `Source: ${describeSpectrumSource(spectrum.source)}.${
+      spectrum.source && spectrum.source.kind !== 'user'
+        ? " Past the table's end the generator's own formula gives Sa while the table matches it."
+        : ''
+    }`,
+    { width: 495 },
+  );
+  doc.moveDown(0.3);
   table(
     doc,
     [
@@ -162,7 +180,7 @@ const SUBSTITUTES: Record<string, string> = {
   '…': '...',
 };
 
-function results(doc: Doc, calc: CalculationDto) {
+function results(doc: Doc, calc: CalculationDto, units: UnitSystem) {
   const analysis = calc.analysis;
   heading(doc, 'Modes and participation');
   if (!analysis) {
@@ -176,7 +194,7 @@ function results(doc: Doc, calc: CalculationDto) {
       { header: 'Period (s)', width: 70, align: 'right' },
       { header: 'Freq. (Hz)', width: 65, align: 'right' },
       { header: 'Part. factor', width: 75, align: 'right' },
-      { header: 'M* (t)', width: 80, align: 'right' },
+      { header: withUnit(units, units === 'US' ? 'W*' : 'M*', 'mass'), width: 80, align: 'right' },
       { header: 'M*/M (%)', width: 60, align: 'right' },
       { header: 'Cumul. (%)', width: 60, align: 'right' },
       { header: 'Sa (g)', width: 45, align: 'right' },
@@ -186,7 +204,7 @@ function results(doc: Doc, calc: CalculationDto) {
       f.period(m.period),
       f.plain(m.frequency),
       f.plain(m.participationFactor) + (shapeNormalisationNote(m) ? ' †' : ''),
-      f.t(m.effectiveMass),
+      inUnits(units, 'mass', m.effectiveMass),
       f.percent(m.effectiveMassRatio),
       f.percent(m.cumulativeMassRatio),
       f.g(m.sa),
@@ -199,11 +217,13 @@ function results(doc: Doc, calc: CalculationDto) {
   }
   for (const w of analysis.warnings) write(doc, `Warning: ${w}`, { width: 495 });
   let height = 0;
-  const elevations = calc.inputs.storeys.map((s) => (height += s.height));
+  const elevations = calc.inputs.storeys.map((s) =>
+    toDisplay(units, 'length', (height += s.height)),
+  );
   lineChart(doc, {
     title: 'Mode shapes (roof = 1 unless noted), first three modes',
     xLabel: 'Mode shape',
-    yLabel: 'Elevation (m)',
+    yLabel: withUnit(units, 'Elevation', 'length'),
     width: 495,
     height: 260,
     series: analysis.modes.slice(0, 3).map((m, i) => ({
@@ -217,68 +237,91 @@ function results(doc: Doc, calc: CalculationDto) {
     title: string,
     xLabel: string,
     pick: (c: CombinedResponse) => number[],
-    scale: number,
+    shown: (si: number) => number,
   ) =>
     lineChart(doc, {
       title,
       xLabel,
-      yLabel: 'Elevation (m)',
+      yLabel: withUnit(units, 'Elevation', 'length'),
       width: 495,
       height: 250,
       series: (['srss', 'cqc', 'abs'] as const).map((method, i) => ({
         label: method === 'abs' ? 'ABS (upper bound)' : method.toUpperCase(),
         points: pick(analysis.combined[method]).map(
-          (v, k) => [v * scale, elevations[k]] as [number, number],
+          (v, k) => [shown(v), elevations[k]] as [number, number],
         ),
         steps: true,
         dash: i === 0 ? undefined : i * 2,
       })),
     });
   if (doc.y > 420) doc.addPage();
-  profile('Storey shear', 'Storey shear (kN)', (c) => c.storeyShear, 1e-3);
+  profile(
+    'Storey shear',
+    withUnit(units, 'Storey shear', 'force'),
+    (c) => c.storeyShear,
+    (v) => toDisplay(units, 'force', v),
+  );
   if (doc.y > 420) doc.addPage();
-  profile('Storey drift ratio', 'Drift ratio', (c) => c.driftRatio, 1);
+  profile(
+    'Storey drift ratio',
+    'Drift ratio',
+    (c) => c.driftRatio,
+    (v) => v,
+  );
 
-  heading(doc, 'Combined responses (CQC)');
-  const cqc = analysis.combined.cqc;
-  table(
-    doc,
-    [
-      { header: 'Storey', width: 45, align: 'right' },
-      { header: 'Label', width: 80 },
-      { header: 'Displ. (mm)', width: 70, align: 'right' },
-      { header: 'Drift ratio', width: 70, align: 'right' },
-      { header: 'Floor force (kN)', width: 75, align: 'right' },
-      { header: 'Shear (kN)', width: 75, align: 'right' },
-      { header: 'Moment (kN·m)', width: 80, align: 'right' },
-    ],
-    cqc.displacement.map((u, i) => [
+  const storeyColumns = [
+    { header: 'Storey', width: 45, align: 'right' as const },
+    { header: 'Label', width: 80 },
+    { header: withUnit(units, 'Displ.', 'displacement'), width: 70, align: 'right' as const },
+    { header: 'Drift ratio', width: 70, align: 'right' as const },
+    { header: withUnit(units, 'Floor force', 'force'), width: 75, align: 'right' as const },
+    { header: withUnit(units, 'Shear', 'force'), width: 75, align: 'right' as const },
+    { header: withUnit(units, 'Moment', 'moment'), width: 80, align: 'right' as const },
+  ];
+  const storeyRows = (r: {
+    displacement: number[];
+    drift: number[];
+    floorForce: number[];
+    storeyShear: number[];
+    overturningMoment: number[];
+  }) =>
+    r.displacement.map((d, i) => [
       String(i + 1),
       calc.inputs.storeys[i]?.label ?? '',
-      f.mm(u),
-      f.ratio(cqc.driftRatio[i]),
-      f.kN(cqc.floorForce[i]),
-      f.kN(cqc.storeyShear[i]),
-      f.kNm(cqc.overturningMoment[i]),
-    ]),
-  );
+      inUnits(units, 'displacement', d),
+      f.ratio(r.drift[i] / calc.inputs.storeys[i].height),
+      inUnits(units, 'force', r.floorForce[i]),
+      inUnits(units, 'force', r.storeyShear[i]),
+      inUnits(units, 'moment', r.overturningMoment[i]),
+    ]);
+  for (const method of ['cqc', 'srss', 'abs'] as const) {
+    heading(
+      doc,
+      `Combined responses (${method === 'abs' ? 'ABS, upper bound' : method.toUpperCase()}), storey by storey`,
+    );
+    table(doc, storeyColumns, storeyRows(analysis.combined[method]));
+  }
   heading(doc, 'Base shear and base moment');
   table(
     doc,
     [
       { header: 'Combination', width: 160 },
-      { header: 'Base shear (kN)', width: 150, align: 'right' },
-      { header: 'Base moment (kN·m)', width: 150, align: 'right' },
+      { header: withUnit(units, 'Base shear', 'force'), width: 150, align: 'right' },
+      { header: withUnit(units, 'Base moment', 'moment'), width: 150, align: 'right' },
     ],
     (['srss', 'cqc', 'abs'] as const).map((method) => [
       method === 'abs' ? 'ABS (upper bound)' : method.toUpperCase(),
-      f.kN(analysis.combined[method].baseShear),
-      f.kNm(analysis.combined[method].baseMoment),
+      inUnits(units, 'force', analysis.combined[method].baseShear),
+      inUnits(units, 'moment', analysis.combined[method].baseMoment),
     ]),
   );
+  for (const m of analysis.modes) {
+    heading(doc, `Mode ${m.number} alone (T = ${f.period(m.period)} s), signed as its shape`);
+    table(doc, storeyColumns, storeyRows(m.response));
+  }
 }
 
-function review(doc: Doc, calc: CalculationDto) {
+function review(doc: Doc, calc: CalculationDto, units: UnitSystem) {
   heading(doc, 'Code-basis checks');
   const checks = calc.checks;
   if (!checks || calc.analysisStale) {
@@ -295,6 +338,9 @@ function review(doc: Doc, calc: CalculationDto) {
       'The checks follow the named clauses as the software reads them; the engineer of record confirms that they apply under the locally adopted code.',
       { width: 495 },
     );
+    for (const warning of checks.warnings ?? []) {
+      write(doc, `WARNING: ${warning}`, { bold: true, width: 495 });
+    }
     doc.moveDown(0.3);
     keyValues(doc, [
       ['Code basis', checks.code],
@@ -304,9 +350,12 @@ function review(doc: Doc, calc: CalculationDto) {
       ],
       [
         'ELF base shear',
-        `${f.kN(checks.elf.baseShear)} kN (${checks.elf.clause}${checks.elf.csGoverns ? `, ${checks.elf.csGoverns}` : ''})`,
+        `${inUnits(units, 'force', checks.elf.baseShear)} ${unitLabel(units, 'force')} (${checks.elf.clause}${checks.elf.csGoverns ? `, ${checks.elf.csGoverns}` : ''})`,
       ],
-      ['Modal base shear', `${f.kN(checks.modalBaseShear)} kN`],
+      [
+        'Modal base shear',
+        `${inUnits(units, 'force', checks.modalBaseShear)} ${unitLabel(units, 'force')}`,
+      ],
       [
         'Scale factors',
         `forces ${checks.scaleFactor.toFixed(3)}, drifts ${checks.driftScaleFactor.toFixed(3)}`,
@@ -339,6 +388,7 @@ function review(doc: Doc, calc: CalculationDto) {
       );
     }
     for (const note of checks.notes) write(doc, note, { width: 495 });
+    if (checks.design) designValues(doc, calc, checks.design, units);
   }
   heading(doc, 'Review comments');
   if (calc.comments.length === 0) write(doc, 'None.');
@@ -364,6 +414,60 @@ function review(doc: Doc, calc: CalculationDto) {
     write(doc, 'Not signed off: this calc is preliminary until a licensed reviewer locks it.', {
       width: 495,
     });
+  }
+}
+
+/** The design storey values beside the elastic ones, each column named. */
+function designValues(
+  doc: Doc,
+  calc: CalculationDto,
+  design: NonNullable<NonNullable<CalculationDto['checks']>['design']>,
+  units: UnitSystem,
+) {
+  const analysis = calc.analysis;
+  if (!analysis) return;
+  const elastic = analysis.combined[design.combination];
+  const left = design.analysisValues === 'elastic' ? 'elastic' : 'analysis';
+  heading(doc, `Storey values for design (${design.combination.toUpperCase()})`);
+  write(doc, design.explanation, { width: 495 });
+  doc.moveDown(0.3);
+  const pairs = [
+    ['Shear', 'force', 'storeyShear'],
+    ['Moment', 'moment', 'overturningMoment'],
+    ['Floor force', 'force', 'floorForce'],
+    ['Drift', 'displacement', 'drift'],
+  ] as const;
+  table(
+    doc,
+    [
+      { header: 'Storey', width: 35, align: 'right' },
+      ...pairs.flatMap(([title, quantity]) => [
+        {
+          header: `${withUnit(units, title, quantity)} ${left}`,
+          width: 57,
+          align: 'right' as const,
+        },
+        {
+          header: `${withUnit(units, title, quantity)} design`,
+          width: 57,
+          align: 'right' as const,
+        },
+      ]),
+    ],
+    calc.inputs.storeys.map((_, i) => [
+      String(i + 1),
+      ...pairs.flatMap(([, quantity, key]) => [
+        inUnits(units, quantity, elastic[key][i]),
+        inUnits(units, quantity, design[key][i]),
+      ]),
+    ]),
+  );
+  if (design.analysisValues === 'design') {
+    write(
+      doc,
+      "'analysis': the EN 1998-1 design spectrum already includes q, so these are design forces; design drifts are q times them.",
+      { width: 495 },
+    );
   }
 }
 
@@ -403,15 +507,16 @@ export async function buildCalcPackage(
   calc: CalculationDto,
   check: SealCheckResponse | null,
   generatedAt: Date,
+  units: UnitSystem = calc.displayUnits,
 ): Promise<Buffer> {
   const doc = newDocument(`${calc.title}, revision ${calc.revision}`);
   cover(doc, calc, check, generatedAt);
   doc.addPage();
-  inputs(doc, calc);
+  inputs(doc, calc, units);
   method(doc);
   doc.addPage();
-  results(doc, calc);
-  review(doc, calc);
+  results(doc, calc, units);
+  review(doc, calc, units);
   decorate(doc, calc);
   return finish(doc);
 }

@@ -104,7 +104,12 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
         version: calc.version,
         ...(dirty && inputs.request ? { inputs: inputs.request, displayUnits: units } : {}),
       },
-      { onSuccess: () => setTab('Results') },
+      // From the inputs, on to the results; from the checks (or any later tab), stay there.
+      {
+        onSuccess: () => {
+          if (tab === 'Storey table' || tab === 'Design spectrum') setTab('Results');
+        },
+      },
     );
 
   const result = calc.analysis;
@@ -137,7 +142,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
           </Stack>
         </Stack>
         <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
-          <DownloadsMenu calc={calc} />
+          <DownloadsMenu calc={calc} units={units} />
           <UnitsToggle units={units} onChange={setUnits} />
         </Stack>
       </Stack>

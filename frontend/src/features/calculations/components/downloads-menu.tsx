@@ -4,16 +4,30 @@ import type { CalculationDto } from '@tiermode/shared-types';
 import { useState } from 'react';
 import { errorMessages } from '@/lib/api-client';
 import { downloadFile } from '@/lib/download';
+import type { UnitSystem } from '@/lib/units';
+
+const withUnits = (path: string, units: UnitSystem) =>
+  `${path}${path.includes('?') ? '&' : '?'}units=${units}`;
 
 const base = (calc: CalculationDto) =>
   `${calc.title.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'calculation'}-rev${calc.revision}`;
 
-/** The calc's results as spreadsheets, and the whole calc as JSON. */
-export function DownloadsMenu({ calc }: { calc: CalculationDto }) {
+/**
+ * The calc's package and results as files, in the units shown on screen, and the whole calc as
+ * JSON (always SI, as the API keeps it).
+ */
+export function DownloadsMenu({ calc, units }: { calc: CalculationDto; units: UnitSystem }) {
   const [anchor, setAnchor] = useState<HTMLElement | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
   const analysed = calc.analysis !== null;
-  const items: { label: string; path: string; file: string; needsResults: boolean }[] = [
+  const designValues = analysed && calc.checks?.design !== undefined && !calc.analysisStale;
+  const items: {
+    label: string;
+    path: string;
+    file: string;
+    needsResults: boolean;
+    hidden?: boolean;
+  }[] = [
     {
       label: 'Calc package (PDF)',
       path: 'report.pdf',
@@ -39,6 +53,13 @@ export function DownloadsMenu({ calc }: { calc: CalculationDto }) {
       file: 'combined.csv',
       needsResults: true,
     },
+    {
+      label: 'Design storey values (CSV)',
+      path: 'results.csv?table=design',
+      file: 'design.csv',
+      needsResults: true,
+      hidden: !designValues,
+    },
     { label: 'Whole calc (JSON)', path: 'export.json', file: 'calc.json', needsResults: false },
   ];
   return (
@@ -52,21 +73,24 @@ export function DownloadsMenu({ calc }: { calc: CalculationDto }) {
         Download
       </Button>
       <Menu open={anchor !== null} anchorEl={anchor} onClose={() => setAnchor(null)}>
-        {items.map((item) => (
-          <MenuItem
-            key={item.label}
-            disabled={item.needsResults && !analysed}
-            onClick={() => {
-              setAnchor(null);
-              downloadFile(
-                `/calculations/${calc.id}/${item.path}`,
-                `${base(calc)}-${item.file}`,
-              ).catch((error: unknown) => setFailure(errorMessages(error).join(' ')));
-            }}
-          >
-            {item.label}
-          </MenuItem>
-        ))}
+        {items
+          .filter((item) => !item.hidden)
+          .map((item) => (
+            <MenuItem
+              key={item.label}
+              disabled={item.needsResults && !analysed}
+              onClick={() => {
+                setAnchor(null);
+                const path = item.path === 'export.json' ? item.path : withUnits(item.path, units);
+                downloadFile(
+                  `/calculations/${calc.id}/${path}`,
+                  `${base(calc)}-${item.file}`,
+                ).catch((error: unknown) => setFailure(errorMessages(error).join(' ')));
+              }}
+            >
+              {item.label}
+            </MenuItem>
+          ))}
       </Menu>
       <Snackbar open={failure !== null} autoHideDuration={8000} onClose={() => setFailure(null)}>
         <Alert severity="error" onClose={() => setFailure(null)}>

@@ -6,7 +6,7 @@ import { elevations } from '../../model/storey-rows';
 import { CorrelationTable } from './correlation-table';
 import { MassChart } from './mass-chart';
 import { MethodView } from './method-view';
-import { ModeShapeChart } from './mode-shape-chart';
+import { ModeShapesPanel } from './mode-shapes-panel';
 import { ImplausibleResultsAlert } from './implausible-results-alert';
 import { ModesTable } from './modes-table';
 import { ResponseProfiles } from './response-profiles';
@@ -51,14 +51,12 @@ export function AnalysisResults({
       )}
       <Section title="Modes">
         <ModesTable modes={result.modes} />
-        <Box sx={{ display: 'grid', gridTemplateColumns: { md: '1fr 1fr' }, gap: 2, mt: 2 }}>
-          <ModeShapeChart
-            modes={result.modes}
-            elevations={levels.slice(0, result.modes[0]?.shape.length)}
-            units={units}
-          />
+        <Box sx={{ mt: 2, maxWidth: 720 }}>
           <MassChart modes={result.modes} />
         </Box>
+      </Section>
+      <Section title="Mode shapes">
+        <ModeShapesPanel modes={result.modes} storeys={storeys} units={units} />
       </Section>
       <Section title="Responses">
         <ResponseProfiles

@@ -1,38 +1,60 @@
-import { Box, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Box,
+  MenuItem,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  TextField,
+  Typography,
+} from '@mui/material';
 import {
   shapeNormalisationNote,
   type AnalysisResponse,
   type StoreyInput,
 } from '@tiermode/shared-types';
+import { useState } from 'react';
 import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 
-const MAX_STOREYS_SHOWN = 6;
+/** Up to this many storeys M and K are written out in full; above it, row by row in band form. */
+const FULL_MATRIX_STOREYS = 8;
 const G = 9.80665;
+/** 1 kip s^2/in = 4448.2216152605 N / 0.0254 m/s^2, in kg: the US mass unit that pairs with kip/in. */
+const KIP_S2_PER_IN = 4448.2216152605 / 0.0254;
+
+const SCROLL = { maxHeight: 380 } as const;
+const mono = { fontFamily: 'monospace' } as const;
 
 function Matrix({ label, values }: { label: string; values: string[][] }) {
   return (
     <Box>
       <Typography variant="subtitle2">{label}</Typography>
-      <Table size="small" aria-label={label} sx={{ width: 'auto' }}>
-        <TableBody>
-          {values.map((row, i) => (
-            <TableRow key={i}>
-              {row.map((v, j) => (
-                <TableCell key={j} align="right" sx={{ fontFamily: 'monospace' }}>
-                  {v}
-                </TableCell>
-              ))}
-            </TableRow>
-          ))}
-        </TableBody>
-      </Table>
+      <TableContainer sx={SCROLL}>
+        <Table size="small" aria-label={label} sx={{ width: 'auto' }}>
+          <TableBody>
+            {values.map((row, i) => (
+              <TableRow key={i}>
+                {row.map((v, j) => (
+                  <TableCell key={j} align="right" sx={mono}>
+                    {v}
+                  </TableCell>
+                ))}
+              </TableRow>
+            ))}
+          </TableBody>
+        </Table>
+      </TableContainer>
     </Box>
   );
 }
 
 /**
- * Every step for a small building: M and K as entered, then each mode's omega^2, Gamma and M*,
- * Sa and its base shear, and how the combined base shears follow from the modal ones.
+ * The method step by step, for a building of any height: M and K (in full for a few storeys,
+ * row by row in band form for more, scrolling inside their frame), every mode's omega^2, T,
+ * Gamma, M*, Sa and base shear, then any one mode worked level by level (L, M_n, Gamma, M*, the
+ * floor forces and displacements), and how the combined base shears follow from the modal ones.
  */
 export function MethodView({
   storeys: rows,
@@ -43,75 +65,215 @@ export function MethodView({
   result: AnalysisResponse;
   units: UnitSystem;
 }) {
-  if (rows.length > MAX_STOREYS_SHOWN) {
-    return (
-      <Typography>
-        The step-by-step view is shown for buildings of up to {MAX_STOREYS_SHOWN} storeys; the
-        tables above hold every value for this one.
-      </Typography>
-    );
-  }
+  const [modeNumber, setModeNumber] = useState(result.modes[0]?.number ?? 1);
   const n = rows.length;
-  // M = diag(m_i); K_ii = k_i + k_(i+1), K_(i,i+1) = -k_(i+1) (the shear-building matrices).
-  const m = rows.map((r, i) => rows.map((_, j) => (i === j ? formatNumber(r.mass / 1000) : '0')));
-  const k = rows.map((_, i) =>
-    rows.map((__, j) => {
-      const value =
-        i === j
-          ? rows[i].stiffness + (i + 1 < n ? rows[i + 1].stiffness : 0)
-          : Math.abs(i - j) === 1
-            ? -rows[Math.max(i, j)].stiffness
-            : 0;
-      return formatNumber(value / 1000);
-    }),
-  );
+  const us = units === 'US';
+  const massUnit = us ? 'kip·s²/in' : 't';
+  const mass = (kg: number) => (us ? kg / KIP_S2_PER_IN : kg / 1000);
+  const stiffness = (nPerM: number) => toDisplay(units, 'stiffness', nPerM);
+  const kUnit = unitLabel(units, 'stiffness');
   const force = unitLabel(units, 'force');
-  const vb = result.modes.map((mode) => mode.response.baseShear);
+  const length = unitLabel(units, 'displacement');
+  // K_ii = k_i + k_(i+1), K_(i,i+1) = K_(i+1,i) = -k_(i+1): the shear building's matrix.
+  const kAt = (i: number, j: number) =>
+    i === j
+      ? rows[i].stiffness + (i + 1 < n ? rows[i + 1].stiffness : 0)
+      : Math.abs(i - j) === 1
+        ? -rows[Math.max(i, j)].stiffness
+        : 0;
+  const mode = result.modes.find((m) => m.number === modeNumber) ?? result.modes[0];
+  const a = mode ? mode.sa * G : 0;
+  const products = mode ? rows.map((r, i) => r.mass * mode.shape[i]) : [];
+  const l = products.reduce((sum, v) => sum + v, 0);
+  const mn = mode ? rows.reduce((sum, r, i) => sum + r.mass * mode.shape[i] ** 2, 0) : 0;
+
   return (
     <Box sx={{ display: 'grid', gap: 2 }}>
       <Typography>
-        Storey 1 is the first row and column. M is in t and K in kN/m; ground motion is along the
-        building, r = [1 … 1]. Solve K φ = ω² M φ; for each mode n with φ normalised to 1 at the
-        roof, L = φᵀ M r, Mₙ = φᵀ M φ, Γ = L / Mₙ and M* = L² / Mₙ; Aₙ = Sa(Tₙ) g and the modal base
-        shear is M* Aₙ.
+        Storey 1 is the first row and column. M is in {massUnit} and K in {kUnit}, so ω² comes out
+        in 1/s²; ground motion is along the building, r = [1 … 1]. Solve K φ = ω² M φ; for each mode
+        n with φ normalised to 1 at the roof, L = φᵀ M r, Mₙ = φᵀ M φ, Γ = L / Mₙ and M* = L² / Mₙ;
+        Aₙ = Sa(Tₙ) g and the modal base shear is M* Aₙ.
       </Typography>
-      <Box sx={{ display: 'flex', gap: 4, flexWrap: 'wrap' }}>
-        <Matrix label="M (t)" values={m} />
-        <Matrix label="K (kN/m)" values={k} />
-      </Box>
-      <Table size="small" aria-label="Modal values">
-        <TableHead>
-          <TableRow>
-            <TableCell>Mode</TableCell>
-            <TableCell align="right">ω² (rad²/s²)</TableCell>
-            <TableCell align="right">T (s)</TableCell>
-            <TableCell align="right">φ (roof = 1 unless noted), storey 1 → roof</TableCell>
-            <TableCell align="right">Γ</TableCell>
-            <TableCell align="right">M* (t)</TableCell>
-            <TableCell align="right">Sa (g)</TableCell>
-            <TableCell align="right">Aₙ (m/s²)</TableCell>
-            <TableCell align="right">Base shear ({force})</TableCell>
-          </TableRow>
-        </TableHead>
-        <TableBody>
-          {result.modes.map((mode, i) => (
-            <TableRow key={mode.number}>
-              <TableCell>{mode.number}</TableCell>
-              <TableCell align="right">{formatNumber(mode.circularFrequency ** 2)}</TableCell>
-              <TableCell align="right">{mode.period.toFixed(4)}</TableCell>
-              <TableCell align="right">
-                {mode.shape.map((v) => formatNumber(v)).join(', ')}
-                {shapeNormalisationNote(mode) && ` (${shapeNormalisationNote(mode)})`}
-              </TableCell>
-              <TableCell align="right">{formatNumber(mode.participationFactor)}</TableCell>
-              <TableCell align="right">{formatNumber(mode.effectiveMass / 1000)}</TableCell>
-              <TableCell align="right">{mode.sa.toFixed(4)}</TableCell>
-              <TableCell align="right">{formatNumber(mode.sa * G)}</TableCell>
-              <TableCell align="right">{formatNumber(toDisplay(units, 'force', vb[i]))}</TableCell>
+      {n <= FULL_MATRIX_STOREYS ? (
+        <Box sx={{ display: 'flex', gap: 4, flexWrap: 'wrap' }}>
+          <Matrix
+            label={`M (${massUnit})`}
+            values={rows.map((r, i) =>
+              rows.map((_, j) => (i === j ? formatNumber(mass(r.mass)) : '0')),
+            )}
+          />
+          <Matrix
+            label={`K (${kUnit})`}
+            values={rows.map((_, i) => rows.map((__, j) => formatNumber(stiffness(kAt(i, j)))))}
+          />
+        </Box>
+      ) : (
+        <Box>
+          <Typography variant="subtitle2">
+            M and K row by row ({n} storeys). M is diagonal and K tridiagonal: every entry not shown
+            is 0.
+          </Typography>
+          <TableContainer sx={SCROLL}>
+            <Table size="small" stickyHeader aria-label="M and K by row">
+              <TableHead>
+                <TableRow>
+                  <TableCell>Row i</TableCell>
+                  <TableCell align="right">Mᵢᵢ ({massUnit})</TableCell>
+                  <TableCell align="right">Kᵢ,ᵢ₋₁ ({kUnit})</TableCell>
+                  <TableCell align="right">Kᵢᵢ ({kUnit})</TableCell>
+                  <TableCell align="right">Kᵢ,ᵢ₊₁ ({kUnit})</TableCell>
+                </TableRow>
+              </TableHead>
+              <TableBody>
+                {rows.map((r, i) => (
+                  <TableRow key={i}>
+                    <TableCell>{i + 1}</TableCell>
+                    <TableCell align="right" sx={mono}>
+                      {formatNumber(mass(r.mass))}
+                    </TableCell>
+                    <TableCell align="right" sx={mono}>
+                      {i > 0 ? formatNumber(stiffness(kAt(i, i - 1))) : '—'}
+                    </TableCell>
+                    <TableCell align="right" sx={mono}>
+                      {formatNumber(stiffness(kAt(i, i)))}
+                    </TableCell>
+                    <TableCell align="right" sx={mono}>
+                      {i + 1 < n ? formatNumber(stiffness(kAt(i, i + 1))) : '—'}
+                    </TableCell>
+                  </TableRow>
+                ))}
+              </TableBody>
+            </Table>
+          </TableContainer>
+        </Box>
+      )}
+      <TableContainer sx={SCROLL}>
+        <Table size="small" stickyHeader aria-label="Modal values">
+          <TableHead>
+            <TableRow>
+              <TableCell>Mode</TableCell>
+              <TableCell align="right">ω² (1/s²)</TableCell>
+              <TableCell align="right">T (s)</TableCell>
+              <TableCell align="right">Γ</TableCell>
+              <TableCell align="right">M* ({massUnit})</TableCell>
+              <TableCell align="right">Sa (g)</TableCell>
+              <TableCell align="right">Aₙ (m/s²)</TableCell>
+              <TableCell align="right">Base shear ({force})</TableCell>
             </TableRow>
-          ))}
-        </TableBody>
-      </Table>
+          </TableHead>
+          <TableBody>
+            {result.modes.map((m) => (
+              <TableRow key={m.number}>
+                <TableCell>{m.number}</TableCell>
+                <TableCell align="right">{formatNumber(m.circularFrequency ** 2)}</TableCell>
+                <TableCell align="right">{m.period.toFixed(4)}</TableCell>
+                <TableCell align="right">
+                  {formatNumber(m.participationFactor)}
+                  {shapeNormalisationNote(m) && ` (${shapeNormalisationNote(m)})`}
+                </TableCell>
+                <TableCell align="right">{formatNumber(mass(m.effectiveMass))}</TableCell>
+                <TableCell align="right">{m.sa.toFixed(4)}</TableCell>
+                <TableCell align="right">{formatNumber(m.sa * G)}</TableCell>
+                <TableCell align="right">
+                  {formatNumber(toDisplay(units, 'force', m.response.baseShear))}
+                </TableCell>
+              </TableRow>
+            ))}
+          </TableBody>
+        </Table>
+      </TableContainer>
+
+      {mode && (
+        <Box
+          component="section"
+          aria-label="One mode, step by step"
+          sx={{ display: 'grid', gap: 1 }}
+        >
+          <TextField
+            select
+            size="small"
+            label="Mode worked step by step"
+            value={mode.number}
+            onChange={(e) => setModeNumber(Number(e.target.value))}
+            sx={{ maxWidth: 320 }}
+          >
+            {result.modes.map((m) => (
+              <MenuItem key={m.number} value={m.number}>
+                Mode {m.number} (T = {formatNumber(m.period)} s)
+              </MenuItem>
+            ))}
+          </TextField>
+          <Typography>
+            1. ω² = {formatNumber(mode.circularFrequency ** 2)} 1/s², so ω ={' '}
+            {formatNumber(mode.circularFrequency)} rad/s and T = 2π / ω = {mode.period.toFixed(4)}{' '}
+            s.
+          </Typography>
+          <Typography>
+            2. With φ as below ({shapeNormalisationNote(mode) || '+1 at the roof'}): L = Σ mᵢ φᵢ ={' '}
+            {formatNumber(mass(l))} and Mₙ = Σ mᵢ φᵢ² = {formatNumber(mass(mn))} {massUnit}.
+          </Typography>
+          <Typography>
+            3. Γ = L / Mₙ = {formatNumber(l / mn)}; M* = L² / Mₙ ={' '}
+            {formatNumber(mass((l * l) / mn))} {massUnit},{' '}
+            {formatNumber(mode.effectiveMassRatio * 100)}% of the mass.
+          </Typography>
+          <Typography>
+            4. Sa({mode.period.toFixed(4)} s) = {mode.sa.toFixed(4)} g from the spectrum, so Aₙ ={' '}
+            {formatNumber(a)} m/s².
+          </Typography>
+          <Typography>
+            5. Floor forces fᵢ = Γ mᵢ φᵢ Aₙ and displacements uᵢ = Γ φᵢ Aₙ / ω²; their sum, the base
+            shear, is M* Aₙ = {formatNumber(toDisplay(units, 'force', mode.response.baseShear))}{' '}
+            {force}.
+          </Typography>
+          <TableContainer sx={SCROLL}>
+            <Table size="small" stickyHeader aria-label={`Mode ${mode.number}, level by level`}>
+              <TableHead>
+                <TableRow>
+                  <TableCell>Level</TableCell>
+                  <TableCell align="right">mᵢ ({massUnit})</TableCell>
+                  <TableCell align="right">φᵢ</TableCell>
+                  <TableCell align="right">mᵢ φᵢ</TableCell>
+                  <TableCell align="right">mᵢ φᵢ²</TableCell>
+                  <TableCell align="right">fᵢ ({force})</TableCell>
+                  <TableCell align="right">uᵢ ({length})</TableCell>
+                </TableRow>
+              </TableHead>
+              <TableBody>
+                {rows.map((r, i) => (
+                  <TableRow key={i}>
+                    <TableCell>{i + 1}</TableCell>
+                    <TableCell align="right">{formatNumber(mass(r.mass))}</TableCell>
+                    <TableCell align="right">{formatNumber(mode.shape[i])}</TableCell>
+                    <TableCell align="right">{formatNumber(mass(products[i]))}</TableCell>
+                    <TableCell align="right">
+                      {formatNumber(mass(r.mass * mode.shape[i] ** 2))}
+                    </TableCell>
+                    <TableCell align="right">
+                      {formatNumber(toDisplay(units, 'force', mode.response.floorForce[i]))}
+                    </TableCell>
+                    <TableCell align="right">
+                      {formatNumber(
+                        toDisplay(units, 'displacement', mode.response.displacement[i]),
+                      )}
+                    </TableCell>
+                  </TableRow>
+                ))}
+                <TableRow>
+                  <TableCell colSpan={3}>Sum</TableCell>
+                  <TableCell align="right">{formatNumber(mass(l))}</TableCell>
+                  <TableCell align="right">{formatNumber(mass(mn))}</TableCell>
+                  <TableCell align="right">
+                    {formatNumber(toDisplay(units, 'force', mode.response.baseShear))}
+                  </TableCell>
+                  <TableCell />
+                </TableRow>
+              </TableBody>
+            </Table>
+          </TableContainer>
+        </Box>
+      )}
       <Typography>
         Combined base shear: SRSS = √(Σ Vₙ²) ={' '}
         {formatNumber(toDisplay(units, 'force', result.combined.srss.baseShear))} {force}; CQC =

@@ -10,10 +10,9 @@ interface Props {
   units: UnitSystem;
 }
 
-/** The first three mode shapes (roof = 1), elevation up the vertical axis, from the fixed base. */
+/** The given mode shapes (roof = 1 unless noted), elevation up the vertical axis, from the base. */
 export function ModeShapeChart({ modes, elevations, units }: Props) {
-  // The first three modes: higher modes' roof-normalised shapes swing far and crowd the plot.
-  const shown = modes.slice(0, 3);
+  const shown = modes;
   return (
     <Box
       sx={{ height: 340 }}
@@ -45,8 +44,8 @@ export function ModeShapeChart({ modes, elevations, units }: Props) {
               })),
             ],
             showLine: true,
-            borderColor: SERIES_COLOURS[i],
-            backgroundColor: SERIES_COLOURS[i],
+            borderColor: SERIES_COLOURS[i % SERIES_COLOURS.length],
+            backgroundColor: SERIES_COLOURS[i % SERIES_COLOURS.length],
             pointRadius: 3,
           })),
         }}

@@ -1,0 +1,33 @@
+import type { Page } from 'playwright-core';
+import { expect } from 'vitest';
+
+/** Follows a link of the main navigation. */
+export const nav = (page: Page, name: string) =>
+  page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name }).click();
+
+/** Types a value into one cell of the storey table (storey 1 = the base). */
+export async function editStorey(page: Page, storey: number, field: string, value: string) {
+  const row = page
+    .getByRole('grid', { name: 'Storey table' })
+    .getByRole('row')
+    .filter({ has: page.getByRole('gridcell', { name: String(storey), exact: true }) });
+  const cell = row.locator(`[data-field="${field}"]`);
+  await cell.dblclick();
+  await cell.locator('input').fill(value);
+  await cell.locator('input').press('Enter');
+}
+
+/**
+ * Presses Analyse (or Save and analyse) and waits until the new results are in the page: the
+ * analysis answered and the calc was read again. The page stays on its tab unless it was on
+ * the inputs, which go on to Results.
+ */
+export async function analyse(page: Page) {
+  const analysed = page.waitForResponse(
+    (r) => r.request().method() === 'POST' && /\/analyse$/.test(new URL(r.url()).pathname),
+  );
+  await page.getByRole('button', { name: /^(Save and analyse|Analyse)$/ }).click();
+  expect((await analysed).status()).toBe(200);
+  await expect.poll(() => page.getByRole('progressbar', { name: 'Working' }).count()).toBe(0);
+  await expect.poll(() => page.getByRole('status').first().textContent()).toBe('All changes saved');
+}

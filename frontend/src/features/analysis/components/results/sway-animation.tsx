@@ -1,0 +1,145 @@
+import PauseIcon from '@mui/icons-material/Pause';
+import PlayArrowIcon from '@mui/icons-material/PlayArrow';
+import { Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import type { ModeResult } from '@tiermode/shared-types';
+import { useEffect, useRef, useState } from 'react';
+import { formatNumber } from '@/lib/units';
+import { swayAt, swayBound } from '../../model/sway';
+
+const WIDTH = 280;
+const HEIGHT = 340;
+const PAD = 24;
+/** Real seconds one cycle of the slowest chosen mode takes at speed 1. */
+const SECONDS_PER_CYCLE = 2.5;
+const SPEEDS = [0.25, 0.5, 1, 2] as const;
+
+/**
+ * The building swaying in the chosen modes: each level moves as the sum of its modal cosines,
+ * u_i(t) = sum of phi_i cos(omega t). Drawn as floors and columns over the still outline, slowed
+ * so that the slowest chosen mode takes 2.5 s a cycle at speed 1. Starts paused.
+ */
+export function SwayAnimation({
+  modes,
+  elevations,
+}: {
+  modes: ModeResult[];
+  /** m, level 1 first */
+  elevations: number[];
+}) {
+  const [playing, setPlaying] = useState(false);
+  const [speed, setSpeed] = useState<(typeof SPEEDS)[number]>(1);
+  const [time, setTime] = useState(0);
+  const frame = useRef<number | null>(null);
+  const slowest = Math.max(...modes.map((m) => m.period), 0);
+  const slowdown = slowest > 0 ? SECONDS_PER_CYCLE / slowest : 1;
+
+  useEffect(() => {
+    if (!playing || modes.length === 0) return;
+    let last = performance.now();
+    const step = (now: number) => {
+      const dt = (now - last) / 1000;
+      last = now;
+      setTime((t) => t + (dt * speed) / slowdown);
+      frame.current = requestAnimationFrame(step);
+    };
+    frame.current = requestAnimationFrame(step);
+    return () => {
+      if (frame.current !== null) cancelAnimationFrame(frame.current);
+    };
+  }, [playing, speed, slowdown, modes.length]);
+
+  const top = elevations[elevations.length - 1] ?? 1;
+  const bound = swayBound(modes) || 1;
+  const u = swayAt(modes, time);
+  const y = (h: number) => HEIGHT - PAD - (h / top) * (HEIGHT - 2 * PAD);
+  // The widest sway reaches a quarter of the width either side of the centre.
+  const x = (shift: number) => WIDTH / 2 + (shift / bound) * (WIDTH / 4);
+  const halfBay = WIDTH / 6;
+  const levels = [0, ...elevations];
+  const shifts = [0, ...u];
+  const names = modes.map((m) => m.number).join(', ');
+
+  return (
+    <Stack spacing={1} sx={{ alignItems: 'flex-start' }}>
+      <Box
+        component="svg"
+        role="img"
+        aria-label={`The building swaying in mode${modes.length > 1 ? 's' : ''} ${names}, each level moving as the sum of its modal cosines`}
+        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
+        sx={{ width: WIDTH, maxWidth: '100%', height: 'auto', bgcolor: 'grey.50' }}
+      >
+        <line x1={PAD / 2} x2={WIDTH - PAD / 2} y1={y(0)} y2={y(0)} stroke="#555" strokeWidth={3} />
+        {levels.slice(1).map((h, k) => {
+          const i = k + 1;
+          const below = levels[i - 1];
+          return (
+            <g key={i}>
+              {/* The still building, for reference. */}
+              <rect
+                x={WIDTH / 2 - halfBay}
+                y={y(h)}
+                width={2 * halfBay}
+                height={y(below) - y(h)}
+                fill="none"
+                stroke="#bbb"
+                strokeDasharray="3 3"
+              />
+              {[-halfBay, halfBay].map((side) => (
+                <line
+                  key={side}
+                  x1={x(shifts[i - 1]) + side}
+                  y1={y(below)}
+                  x2={x(shifts[i]) + side}
+                  y2={y(h)}
+                  stroke="#23465f"
+                  strokeWidth={2}
+                />
+              ))}
+              <line
+                x1={x(shifts[i]) - halfBay - 6}
+                x2={x(shifts[i]) + halfBay + 6}
+                y1={y(h)}
+                y2={y(h)}
+                stroke="#b5541c"
+                strokeWidth={4}
+              />
+            </g>
+          );
+        })}
+      </Box>
+      <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+        <Button
+          variant="outlined"
+          size="small"
+          startIcon={playing ? <PauseIcon /> : <PlayArrowIcon />}
+          onClick={() => setPlaying(!playing)}
+          disabled={modes.length === 0}
+        >
+          {playing ? 'Pause' : 'Play'}
+        </Button>
+        <TextField
+          select
+          size="small"
+          label="Speed"
+          value={speed}
+          onChange={(e) => setSpeed(Number(e.target.value) as (typeof SPEEDS)[number])}
+          sx={{ width: 110 }}
+        >
+          {SPEEDS.map((s) => (
+            <MenuItem key={s} value={s}>
+              {s}×
+            </MenuItem>
+          ))}
+        </TextField>
+        <Button size="small" onClick={() => setTime(0)}>
+          Back to the start
+        </Button>
+      </Stack>
+      <Typography variant="caption" color="text.secondary" data-testid="sway-time">
+        t = {formatNumber(time, 3)} s of the building&apos;s time, played at{' '}
+        {formatNumber(speed / slowdown, 3)} × its own speed. Each mode moves with its shape as
+        amplitude (undamped), so the drawing shows how the modes combine, not a design response.
+      </Typography>
+    </Stack>
+  );
+}
