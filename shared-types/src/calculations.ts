@@ -46,6 +46,8 @@ export interface CalculationDto {
   seal: SealDto | null;
   /** The revision this one was revised from. */
   previousRevisionId: string | null;
+  /** The revision made from this one, once it exists (a calc has at most one next revision). */
+  nextRevision: { id: string; revision: number; status: CalculationStatus } | null;
   comments: ReviewCommentDto[];
   /** Files kept with the calc; their SHA-256 is sealed with it. */
   attachments: AttachmentDto[];
@@ -149,6 +151,10 @@ export interface ReviewCommentDto {
   body: string;
   /** What the comment is about, e.g. "storey 3" or "CQC base shear"; null for the whole calc. */
   target: string | null;
+  /** The storey (1 = the base) it is tied to, marked on that storey's row; or null. */
+  storey: number | null;
+  /** The comment it answers (always a first comment, never a reply); null for a first comment. */
+  parentId: string | null;
   resolved: boolean;
   createdAt: string;
 }
@@ -168,6 +174,10 @@ export interface AttachmentDto {
 export interface CreateCommentRequest {
   body: string;
   target?: string;
+  /** Ties the comment to a storey of the calc (1 = the base). */
+  storey?: number;
+  /** Answers a comment of the same calc; a reply to a reply answers its first comment. */
+  parentId?: string;
 }
 
 /** `PATCH /api/comments/:id`. */
@@ -192,6 +202,8 @@ export interface CalculationSummaryDto {
   returnedAt: string | null;
   lockedAt: string | null;
   updatedAt: string;
+  /** First comments not yet resolved (replies are not counted). */
+  openComments: number;
 }
 
 /**

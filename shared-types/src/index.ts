@@ -13,3 +13,4 @@ export * from './spectrum-source';
 export * from './spectrum-table';
 export * from './dates';
 export * from './units';
+export * from './changes';

@@ -6,11 +6,12 @@ import { accessibleWhere } from '../authorization/accessible-where';
 import type { AppAbility } from '../authorization/app-ability';
 import type { User } from '../users/user.entity';
 import { Calculation } from './calculation.entity';
+import { ReviewComment } from './review-comment.entity';
 import { calculationSubject, isAnalysisStale } from './calculation.mapper';
 import type { ListCalculationsDto } from './dto/list-calculations.dto';
 
 const POPULATE = ['project.members', 'author', 'reviewer'] as const;
-const LARGE_COLUMNS = ['analysis', 'checks'] as const;
+const LARGE_COLUMNS = ['analysis', 'checks', 'submittedInputs', 'submittedBasis'] as const;
 
 /** The lists of calcs: the firm-wide list behind the dashboard and project pages, and the library. */
 @Injectable()
@@ -41,24 +42,36 @@ export class CalculationListsService {
         limit: query.limit ?? 100,
       },
     );
-    return calcs
-      .filter((c) => ability.can('read', subject('Calculation', calculationSubject(c))))
-      .map((c) => ({
-        id: c.id,
-        projectId: c.project.id,
-        projectName: c.project.name,
-        title: c.title,
-        revision: c.revision,
-        status: c.status,
-        storeyCount: c.inputs.storeys.length,
-        author: { id: c.author.id, name: c.author.name },
-        reviewer: c.reviewer ? { id: c.reviewer.id, name: c.reviewer.name } : null,
-        analysisStale: isAnalysisStale(c),
-        submittedAt: c.submittedAt?.toISOString() ?? null,
-        returnedAt: c.returnedAt?.toISOString() ?? null,
-        lockedAt: c.lockedAt?.toISOString() ?? null,
-        updatedAt: c.updatedAt.toISOString(),
-      }));
+    const readable = calcs.filter((c) =>
+      ability.can('read', subject('Calculation', calculationSubject(c))),
+    );
+    // Open first comments per calc, for "Returned with comments (3)" on the dashboard.
+    const open = await this.em.find(
+      ReviewComment,
+      { calculation: { $in: readable.map((c) => c.id) }, resolved: false, parent: null },
+      { fields: ['calculation'] },
+    );
+    const openCount = new Map<string, number>();
+    for (const comment of open) {
+      openCount.set(comment.calculation.id, (openCount.get(comment.calculation.id) ?? 0) + 1);
+    }
+    return readable.map((c) => ({
+      id: c.id,
+      projectId: c.project.id,
+      projectName: c.project.name,
+      title: c.title,
+      revision: c.revision,
+      status: c.status,
+      storeyCount: c.inputs.storeys.length,
+      author: { id: c.author.id, name: c.author.name },
+      reviewer: c.reviewer ? { id: c.reviewer.id, name: c.reviewer.name } : null,
+      analysisStale: isAnalysisStale(c),
+      submittedAt: c.submittedAt?.toISOString() ?? null,
+      returnedAt: c.returnedAt?.toISOString() ?? null,
+      lockedAt: c.lockedAt?.toISOString() ?? null,
+      updatedAt: c.updatedAt.toISOString(),
+      openComments: openCount.get(c.id) ?? 0,
+    }));
   }
 
   /** Locked and superseded calcs the caller may read, newest lock first. */

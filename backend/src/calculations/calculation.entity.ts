@@ -42,6 +42,8 @@ export class Calculation {
     | 'inputsChangedAt'
     | 'reviewer'
     | 'submittedAt'
+    | 'submittedInputs'
+    | 'submittedBasis'
     | 'returnedAt'
     | 'lockedAt'
     | 'seal'
@@ -104,6 +106,13 @@ export class Calculation {
   @Property({ type: DateTimeType, nullable: true })
   submittedAt: Date | null = null;
 
+  /** The inputs and basis as last submitted: what a resubmission is compared with. */
+  @Property({ type: 'json', nullable: true })
+  submittedInputs: CalculationInputs | null = null;
+
+  @Property({ type: 'json', nullable: true })
+  submittedBasis: CodeBasisParameters | null = null;
+
   @Property({ type: DateTimeType, nullable: true })
   returnedAt: Date | null = null;
 
@@ -120,6 +129,10 @@ export class Calculation {
    */
   @ManyToOne(() => Calculation, { nullable: true, unique: true })
   previousRevision: Calculation | null = null;
+
+  /** The revision made from this one: none or one (the unique index above). */
+  @OneToMany(() => Calculation, (c) => c.previousRevision)
+  nextRevisions = new Collection<Calculation>(this);
 
   @OneToMany(() => ReviewComment, (comment) => comment.calculation, {
     orderBy: { createdAt: 'asc' },
@@ -177,6 +190,8 @@ export class Calculation {
     }
     this.status = 'submitted';
     this.submittedAt = at;
+    this.submittedInputs = structuredClone(this.inputs);
+    this.submittedBasis = this.basis ? structuredClone(this.basis) : null;
   }
 
   /** Reviewer: a submitted calc goes back to its designers as a draft. */

@@ -33,12 +33,15 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     lockedAt: calc.lockedAt?.toISOString() ?? null,
     seal: calc.seal,
     previousRevisionId: calc.previousRevision?.id ?? null,
+    nextRevision: nextRevisionOf(calc),
     comments: calc.comments.isInitialized()
       ? calc.comments.getItems().map((c) => ({
           id: c.id,
           author: { id: c.author.id, name: c.author.name },
           body: c.body,
           target: c.target,
+          storey: c.storey,
+          parentId: c.parent?.id ?? null,
           resolved: c.resolved,
           createdAt: c.createdAt.toISOString(),
         }))
@@ -50,6 +53,12 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     updatedAt: calc.updatedAt.toISOString(),
     version: calc.version,
   };
+}
+
+/** The next revision, where the relation was loaded and one exists. */
+function nextRevisionOf(calc: Calculation): CalculationDto['nextRevision'] {
+  const next = calc.nextRevisions.isInitialized() ? calc.nextRevisions.getItems()[0] : undefined;
+  return next ? { id: next.id, revision: next.revision, status: next.status } : null;
 }
 
 export function toAttachmentDto(a: Attachment): AttachmentDto {

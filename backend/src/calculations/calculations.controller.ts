@@ -1,7 +1,19 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import {
+  BadRequestException,
+  Body,
+  Controller,
+  Delete,
+  Get,
+  HttpCode,
+  Param,
+  Patch,
+  Post,
+  Query,
+} from '@nestjs/common';
 import type {
   AnalysisResponse,
   AuditEventDto,
+  CalculationChanges,
   CalculationDto,
   SealCheckResponse,
 } from '@tiermode/shared-types';
@@ -163,6 +175,24 @@ export class CalculationsController {
     return this.calculations.checkSeal(ability, id);
   }
 
+  @ApiContract({
+    summary:
+      'What changed since the last submission or the previous revision, storey by storey and field by field',
+    returns: 'CalculationChanges',
+  })
+  @Get('calculations/:id/changes')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  changes(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+    @Query('since') since?: string,
+  ): Promise<CalculationChanges> {
+    if (since !== 'submission' && since !== 'revision') {
+      throw new BadRequestException(['since must be one of submission, revision']);
+    }
+    return this.calculations.changes(ability, id, since);
+  }
+
   @ApiContract({ summary: 'The audit events of a calc', returns: 'AuditEventDto[]' })
   @Get('calculations/:id/history')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
@@ -186,7 +216,7 @@ export class CalculationsController {
     @Param('id', UuidParam('id')) id: string,
     @Body() body: CreateCommentDto,
   ): Promise<CalculationDto> {
-    return this.calculations.addComment(ability, user, id, body.body, body.target ?? null);
+    return this.calculations.addComment(ability, user, id, body);
   }
 
   @ApiContract({

@@ -6,20 +6,27 @@ import {
   UniqueConstraintViolationException,
 } from '@mikro-orm/sqlite';
 import {
+  BadRequestException,
   ConflictException,
   ForbiddenException,
   Injectable,
   NotFoundException,
 } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { isLicensed } from '../authorization/licence';
-import type {
-  AnalysisRequest,
-  AnalysisResponse,
-  CalculationDto,
-  CalculationInputs,
-  Action,
-  CalculationStatus,
-  SealCheckResponse,
+import type { AppEnvironment } from '../config/environment';
+import {
+  changeNames,
+  inputChanges,
+  type AnalysisRequest,
+  type AnalysisResponse,
+  type CalculationChanges,
+  type CalculationDto,
+  type CalculationInputs,
+  type Action,
+  type CalculationStatus,
+  type CreateCommentRequest,
+  type SealCheckResponse,
 } from '@tiermode/shared-types';
 import { AnalysisService } from '../analysis/analysis.service';
 import { AuditService } from '../audit/audit.service';
@@ -44,6 +51,7 @@ const POPULATE = [
   'comments.author',
   'attachments.uploadedBy',
   'previousRevision',
+  'nextRevisions',
 ] as const;
 
 /** Comments may be written while a calc is a draft or under review. */
@@ -101,6 +109,7 @@ export class CalculationsService {
     private readonly audit: AuditService,
     private readonly mail: MailService,
     private readonly key: SigningKey,
+    private readonly config: ConfigService<AppEnvironment, true>,
   ) {}
 
   async listForProject(ability: AppAbility, projectId: string): Promise<CalculationDto[]> {
@@ -178,6 +187,7 @@ export class CalculationsService {
       }
       throw error;
     }
+    const before = { inputs: calc.inputs, basis: calc.basis, title: calc.title };
     if (body.title !== undefined) calc.title = body.title;
     // Display units change how values are shown, not what they are: the results stay current.
     if (body.displayUnits !== undefined) calc.displayUnits = body.displayUnits;
@@ -201,6 +211,11 @@ export class CalculationsService {
         inputs: body.inputs !== undefined,
         displayUnits: body.displayUnits ?? null,
         basis: body.basis === undefined ? null : (body.basis?.code ?? 'removed'),
+        // What changed, in a few words each: "storey 2 mass", "spectrum points", "basis sds".
+        changes: [
+          ...(before.title !== calc.title ? ['title'] : []),
+          ...changeNames(inputChanges(before, { inputs: calc.inputs, basis: calc.basis })),
+        ],
       },
     });
     return toCalculationDto(calc);
@@ -250,11 +265,23 @@ export class CalculationsService {
   ): Promise<CalculationDto> {
     const calc = await this.loadFor(ability, id, 'return');
     calc.returnToDesigner(reviewer, new Date());
+    // The mail carries every open comment (the return's own first) and a link to the review.
+    const open = [
+      `- ${comment} (${reviewer.name})`,
+      ...calc.comments
+        .getItems()
+        .filter((c) => !c.resolved && c.parent === null)
+        .map((c) => `- ${c.target ? `On ${c.target}: ` : ''}${c.body} (${c.author.name})`),
+    ];
     this.em.create(ReviewComment, { calculation: calc, author: reviewer, body: comment });
+    const link = `${this.config.get('publicUrl', { infer: true })}/calculations/${calc.id}?tab=review`;
     this.mail.queue(this.em, {
       to: [calc.author.email],
       subject: `Returned with comments: ${calc.title} (revision ${calc.revision})`,
-      text: `${reviewer.name} returned "${calc.title}", revision ${calc.revision}, to you as a draft:\n\n${comment}`,
+      text:
+        `${reviewer.name} returned "${calc.title}", revision ${calc.revision}, to you as a draft.\n\n` +
+        `Open comments (${open.length}):\n${open.join('\n')}\n\n` +
+        `Open the calc: ${link}`,
     });
     await this.audit.commit(this.em, {
       calculationId: calc.id,
@@ -353,23 +380,48 @@ export class CalculationsService {
     return files;
   }
 
-  /** A comment on a calc that is not yet of record, tied to a storey or result when given. */
+  /**
+   * A comment on a calc that is not yet of record, tied to a storey or result when given, or a
+   * reply to another comment of the same calc (a reply to a reply answers its first comment).
+   */
   async addComment(
     ability: AppAbility,
     author: User,
     id: string,
-    body: string,
-    target: string | null,
+    request: CreateCommentRequest,
   ): Promise<CalculationDto> {
     const calc = await this.loadFor(ability, id, 'comment', (c) => c.assertNotOfRecord());
-    const comment = this.em.create(ReviewComment, { calculation: calc, author, body, target });
+    const storeys = calc.inputs.storeys.length;
+    if (request.storey !== undefined && request.storey > storeys) {
+      throw new BadRequestException([
+        `storey must be at most ${storeys} (this calc has ${storeys} storeys; 1 = the base)`,
+      ]);
+    }
+    let parent: ReviewComment | null = null;
+    if (request.parentId !== undefined) {
+      const answered = calc.comments.getItems().find((c) => c.id === request.parentId);
+      if (!answered) {
+        throw new BadRequestException(['parentId must be the id of a comment on this calculation']);
+      }
+      parent = answered.parent ?? answered;
+    }
+    const storey = request.storey ?? parent?.storey ?? null;
+    const target = request.target ?? (storey !== null ? `storey ${storey}` : null);
+    const comment = this.em.create(ReviewComment, {
+      calculation: calc,
+      author,
+      body: request.body,
+      target,
+      storey,
+      parent,
+    });
     await this.audit.commit(
       this.em,
       {
         calculationId: calc.id,
         actor: author,
-        action: 'commented',
-        detail: { commentId: comment.id, target },
+        action: parent ? 'replied' : 'commented',
+        detail: { commentId: comment.id, target, ...(parent ? { parentId: parent.id } : {}) },
       },
       stillIn(calc, OPEN_FOR_COMMENTS),
     );
@@ -407,6 +459,56 @@ export class CalculationsService {
     );
     await this.em.populate(calc, ['comments.author'], { refresh: true });
     return toCalculationDto(calc);
+  }
+
+  /**
+   * What changed since the calc was last submitted (its inputs and basis as they went to review)
+   * or since the revision it was made from: storey by storey, field by field.
+   */
+  async changes(
+    ability: AppAbility,
+    id: string,
+    since: 'submission' | 'revision',
+  ): Promise<CalculationChanges> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    const now = { inputs: calc.inputs, basis: calc.basis };
+    if (since === 'submission') {
+      if (!calc.submittedInputs) {
+        throw new ConflictException(
+          calc.submittedAt
+            ? 'This calculation was submitted before submissions were kept for comparison: nothing to compare with'
+            : 'This calculation has not been submitted yet: nothing to compare with',
+        );
+      }
+      return {
+        since,
+        baseline: {
+          calculationId: calc.id,
+          revision: calc.revision,
+          at: calc.submittedAt?.toISOString() ?? null,
+        },
+        ...inputChanges({ inputs: calc.submittedInputs, basis: calc.submittedBasis }, now),
+      };
+    }
+    const previous = calc.previousRevision;
+    if (!previous) {
+      throw new ConflictException(
+        'This is revision 1: there is no previous revision to compare with',
+      );
+    }
+    return {
+      since,
+      baseline: {
+        calculationId: previous.id,
+        revision: previous.revision,
+        at: previous.lockedAt?.toISOString() ?? null,
+      },
+      ...inputChanges({ inputs: previous.inputs, basis: previous.basis }, now),
+    };
   }
 
   /** The audit trail of one calculation. */

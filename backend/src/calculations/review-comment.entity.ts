@@ -13,7 +13,7 @@ import { Calculation } from './calculation.entity';
 /** A reviewer's comment on a calculation (a return always carries one). */
 @Entity({ tableName: 'review_comments' })
 export class ReviewComment {
-  [OptionalProps]?: 'target' | 'resolved' | 'createdAt';
+  [OptionalProps]?: 'target' | 'storey' | 'parent' | 'resolved' | 'createdAt';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -30,6 +30,14 @@ export class ReviewComment {
   /** What it is about, e.g. "storey 3" or "CQC base shear"; null for the whole calc. */
   @Property({ type: 'string', length: 200, nullable: true })
   target: string | null = null;
+
+  /** The storey (1 = the base) the comment is about, marked on that storey's row; or null. */
+  @Property({ type: 'integer', nullable: true })
+  storey: number | null = null;
+
+  /** The comment this one answers; replies to a reply answer its first comment. */
+  @ManyToOne(() => ReviewComment, { nullable: true, deleteRule: 'cascade' })
+  parent: ReviewComment | null = null;
 
   @Property({ type: 'boolean' })
   resolved: boolean = false;

@@ -8,6 +8,11 @@ import { MailCatcher } from './mail-catcher';
 import { MailMessage } from './mail-message.entity';
 
 const FROM = 'Tiermode <no-reply@tiermode.test>';
+
+/** The caution every message ends with (product.md, "Cautions"). */
+export const MAIL_CAUTION =
+  'Tiermode is an aid to an engineer’s judgement: the locally adopted building code governs, ' +
+  'the engineer of record decides, and a calc is preliminary until a licensed reviewer locks it.';
 /** Wait before each further attempt; after the last, the message is marked failed. */
 const RETRY_DELAYS_MS = [2_000, 10_000, 60_000, 300_000];
 
@@ -55,7 +60,10 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     await this.catcher?.close();
   }
 
-  /** Queues a message; it is written by the caller's next flush, with the action. */
+  /**
+   * Queues a message, ending with the caution line; it is written by the caller's next flush,
+   * with the action.
+   */
   queue(em: EntityManager, mail: OutgoingMail): void {
     if (mail.to.length === 0) return;
     em.create(MailMessage, {
@@ -63,7 +71,7 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
       from: FROM,
       to: mail.to.join(', '),
       subject: mail.subject,
-      text: mail.text,
+      text: `${mail.text}\n\n-- \n${MAIL_CAUTION}`,
     });
   }
 
@@ -83,10 +91,14 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     return this.delivering;
   }
 
+  /**
+   * Each message the app sent, once: the copy the local catcher receives of it is kept apart
+   * (status `received`, read by the tests as the recipient got it) and not listed again.
+   */
   async outbox(): Promise<MailMessageDto[]> {
     const messages = await this.orm.em
       .fork()
-      .find(MailMessage, {}, { orderBy: { createdAt: 'desc' } });
+      .find(MailMessage, { status: { $ne: 'received' } }, { orderBy: { createdAt: 'desc' } });
     return messages.map((m) => ({
       id: m.id,
       status: m.status,

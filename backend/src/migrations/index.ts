@@ -13,6 +13,7 @@ import { Migration20261202015831 } from './Migration20261202015831';
 import { Migration20261202022030 } from './Migration20261202022030';
 import { Migration20261203073309 } from './Migration20261203073309';
 import { Migration20261203074322 } from './Migration20261203074322';
+import { Migration20261203143328 } from './Migration20261203143328';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -30,4 +31,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202022030', class: Migration20261202022030 },
   { name: 'Migration20261203073309', class: Migration20261203073309 },
   { name: 'Migration20261203074322', class: Migration20261203074322 },
+  { name: 'Migration20261203143328', class: Migration20261203143328 },
 ];

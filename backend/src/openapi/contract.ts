@@ -12,6 +12,7 @@ export interface ContractTypes {
   AnalysisResponse: C.AnalysisResponse;
   AuditEventDto: C.AuditEventDto;
   AuditVerifyResponse: C.AuditVerifyResponse;
+  CalculationChanges: C.CalculationChanges;
   CalculationDto: C.CalculationDto;
   CalculationExport: C.CalculationExport;
   CalculationListQuery: C.CalculationListQuery;

@@ -1,6 +1,6 @@
 import type { CreateCommentRequest, UpdateCommentRequest } from '@tiermode/shared-types';
 import { Transform } from 'class-transformer';
-import { IsBoolean, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsBoolean, IsInt, IsNotEmpty, IsString, IsUUID, MaxLength, Min } from 'class-validator';
 import { trim } from '../../common/validation/trim';
 import { IsOmittable } from '../../common/validation/is-omittable';
 
@@ -16,6 +16,15 @@ export class CreateCommentDto implements CreateCommentRequest {
   @IsString({ message: 'target must be a string, e.g. "storey 3"' })
   @MaxLength(200, { message: 'target must be at most 200 characters' })
   target?: string;
+
+  @IsOmittable()
+  @IsInt({ message: 'storey must be a whole number (1 = the base)' })
+  @Min(1, { message: 'storey must be 1 or more (1 = the base)' })
+  storey?: number;
+
+  @IsOmittable()
+  @IsUUID('all', { message: 'parentId must be the id of a comment on this calculation' })
+  parentId?: string;
 }
 
 export class UpdateCommentDto implements UpdateCommentRequest {
