@@ -65,6 +65,17 @@ async function submitted(): Promise<string> {
   return id;
 }
 
+/** A submitted calc the reviewer returned to the designer. */
+async function returned(): Promise<string> {
+  const id = await submitted();
+  await http()
+    .post(`/api/calculations/${id}/return`)
+    .set(as('reviewer'))
+    .send({ comment: 'Returned (matrix test).' })
+    .expect(200);
+  return id;
+}
+
 async function locked(): Promise<string> {
   const id = await submitted();
   await http()
@@ -317,6 +328,15 @@ const MATRIX: Cell[] = [
     call: async (c) =>
       http()
         .get(`/api/calculations/${await locked()}/seal`)
+        .set(as(c)),
+  },
+  {
+    route: 'GET /api/calculations/:id/changes (returned)',
+    allowed: staff,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await returned()}/changes?since=submission`)
         .set(as(c)),
   },
   {

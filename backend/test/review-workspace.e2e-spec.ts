@@ -33,25 +33,34 @@ async function edit(id: string, change: object) {
 }
 
 describe('What changed since the last submission, and since the previous revision', () => {
-  it('compares with the inputs as submitted, storey by storey and field by field', async () => {
+  it('compares with the submission the reviewer returned, storey by storey and field by field', async () => {
     const calc = await calcInState(signedIn, 'submitted', 'Changes since submission');
-    const none = await http()
+    // A first submission has nothing to be compared with.
+    const first = await http()
       .get(`/api/calculations/${calc.id}/changes?since=submission`)
       .set(as('reviewer'))
-      .expect(200);
-    expect((none.body as CalculationChanges).unchanged).toBe(true);
-
+      .expect(409);
+    expect(first.body.message[0]).toContain('has not been returned by a reviewer yet');
     await http()
       .post(`/api/calculations/${calc.id}/return`)
       .set(as('reviewer'))
       .send({ comment: 'Storey 2 looks heavy.' })
       .expect(200);
+    const none = await http()
+      .get(`/api/calculations/${calc.id}/changes?since=submission`)
+      .set(as('designer'))
+      .expect(200);
+    expect((none.body as CalculationChanges).unchanged).toBe(true);
+
     const inputs = sampleInputs();
     inputs.storeys[1].mass = 250_000;
     inputs.storeys.push({ mass: 100_000, stiffness: 2e8, height: 3 });
     inputs.spectrum.points[1] = { period: 0.5, sa: 1.1 };
     inputs.dampingRatio = 0.04;
     await edit(calc.id, { inputs, basis: ASCE_BASIS });
+    // Resubmitted: the reviewer sees what changed since the submission they returned.
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
 
     const changes = (
       await http()

@@ -107,7 +107,7 @@ describe('The analysis page (designer)', () => {
     // The storey table marks the row of the storey to look at.
     await page
       .getByRole('grid', { name: 'Storey table' })
-      .getByLabel(/^Storey 2: /)
+      .getByRole('img', { name: /^Storey 2: / })
       .first()
       .waitFor();
     await screenshot(page, 'analysis-implausible');

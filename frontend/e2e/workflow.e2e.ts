@@ -1,6 +1,13 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, newPage, screenshot, signIn, type DemoRole } from './support/browser';
+import {
+  launchBrowser,
+  newPage,
+  screenshot,
+  SCREENSHOTS,
+  signIn,
+  type DemoRole,
+} from './support/browser';
 import { analyse, editStorey, nav } from './support/calc-page';
 
 // An invented project for this journey; every name and number is made up.
@@ -134,16 +141,34 @@ describe('The review workflow, across the four roles', () => {
       await screenshot(page, 'workflow-05-return-dialog');
       await dialog.getByRole('button', { name: 'Return the calc' }).click();
       await dialog.waitFor({ state: 'detached' });
-      await page.getByText('Draft', { exact: true }).first().waitFor();
+      // The storey comment and the return's own: both open.
+      await page.getByText('Returned with comments (2)', { exact: true }).first().waitFor();
     });
   });
 
   it('designer: resolves the comment, fixes the storey and resubmits', async () => {
     await as(browser, 'designer', async (page) => {
+      await page
+        .getByRole('grid', { name: 'My drafts' })
+        .getByText('Returned with comments (2)')
+        .waitFor();
       await openFromDashboard(page, 'My drafts');
+      // The reviewer's storey comment is marked on storey 2's row.
+      await page.getByRole('img', { name: 'Storey 2: 1 open comment' }).waitFor();
+      await screenshot(page, 'workflow-05a-storey-comment-marked');
       await openTab(page, 'Review');
       const thread = page.getByRole('list', { name: 'Review comments' });
       await thread.getByText('check the plant load').waitFor();
+      // The designer answers the comment before fixing it.
+      await thread.getByRole('button', { name: 'Reply' }).first().click();
+      await page
+        .getByLabel('Reply', { exact: true })
+        .fill('Plant moved to the roof; mass revised.');
+      await page.getByRole('button', { name: 'Send the reply' }).click();
+      await thread
+        .getByRole('list', { name: /^Replies to / })
+        .getByText('Plant moved to the roof; mass revised.')
+        .waitFor();
       // The box follows the saved state, so it turns once the server has the change.
       await thread.getByRole('checkbox', { name: 'Resolved' }).first().click();
       await expect
@@ -169,6 +194,15 @@ describe('The review workflow, across the four roles', () => {
     await as(browser, 'reviewer', async (page) => {
       await openFromDashboard(page, 'Waiting for my review');
       await openTab(page, 'Review');
+      // What changed since the last submission: storey 2's weight, marked old -> new.
+      const changes = page.getByRole('table', { name: 'Changes by storey' });
+      await changes.waitFor();
+      const changed = changes.locator('[data-changed="true"]');
+      expect(await changed.count()).toBe(1);
+      expect(await changed.textContent()).toMatch(/^[\d,.]+ → 880$/);
+      await page.getByRole('region', { name: 'What changed' }).screenshot({
+        path: `${SCREENSHOTS}/workflow-06a-what-changed.png`,
+      });
       await page.getByRole('button', { name: 'Lock as the calc of record' }).click();
       const dialog = page.getByRole('dialog', { name: 'Lock as the calc of record' });
       await expect
@@ -217,19 +251,36 @@ describe('The review workflow, across the four roles', () => {
     await as(browser, 'admin', async (page) => {
       await nav(page, 'Outbox');
       const outbox = page.getByRole('grid', { name: 'Outbox' });
-      for (const subject of [
-        `Submitted for review: ${CALC} (revision 1)`,
-        `Returned with comments: ${CALC} (revision 1)`,
-        `Locked as the calc of record: ${CALC} (revision 1)`,
-      ]) {
-        await outbox.getByText(subject).first().waitFor();
-      }
-      await outbox.getByText(`Returned with comments: ${CALC} (revision 1)`).first().click();
-      await page
-        .getByRole('region', { name: 'Message' })
-        .getByText('Please revisit storey 2')
+      await outbox.getByText(`Locked as the calc of record: ${CALC} (revision 1)`).waitFor();
+      // Each message once (the catcher's copy is not listed again); submitted twice, so two.
+      expect(await outbox.getByText(`Submitted for review: ${CALC} (revision 1)`).count()).toBe(2);
+      expect(await outbox.getByText(`Returned with comments: ${CALC} (revision 1)`).count()).toBe(
+        1,
+      );
+      await outbox.getByText(`Returned with comments: ${CALC} (revision 1)`).click();
+      const message = page.getByRole('region', { name: 'Message' });
+      await message.getByText('Please revisit storey 2').waitFor();
+      await message
+        .getByText(/Open the calc: http:\/\/[^ ]+\/calculations\/[^ ]+\?tab=review/)
         .waitFor();
+      await message.getByText(/the engineer of record decides/).waitFor();
       await screenshot(page, 'workflow-12-outbox');
+    });
+  });
+
+  it('designer: starts revision 2, and revision 1 then links to it', async () => {
+    await as(browser, 'designer', async (page) => {
+      await page.goto(calcUrl);
+      await openTab(page, 'Review');
+      await page.getByRole('button', { name: 'Start revision 2' }).click();
+      await page.getByText('Revision 2 ·').waitFor();
+      await page.goto(calcUrl);
+      await openTab(page, 'Review');
+      const next = page.getByRole('alert', { name: 'Next revision' });
+      await next.getByRole('link', { name: 'open revision 2' }).waitFor();
+      expect(await page.getByRole('button', { name: 'Start revision 2' }).count()).toBe(0);
+      await next.getByRole('link', { name: 'open revision 2' }).click();
+      await page.getByText('Revision 2 ·').waitFor();
     });
   });
 });

@@ -17,10 +17,16 @@ export interface StoreyChange {
   fields: FieldChange[];
 }
 
-/** `GET /api/calculations/:id/changes?since=submission|revision`. */
+/**
+ * `GET /api/calculations/:id/changes?since=submission|revision`: since the submission the
+ * reviewer last returned, or since the locked revision the calc was made from.
+ */
 export interface CalculationChanges {
   since: 'submission' | 'revision';
-  /** What the calc is compared with: the inputs as last submitted, or the previous revision. */
+  /**
+   * What the calc is compared with: the submission the reviewer last returned (`at` = when it
+   * was returned), or the previous revision (`at` = when it was locked).
+   */
   baseline: { calculationId: string; revision: number; at: string | null };
   storeys: StoreyChange[];
   /** Points (`points[i]`, 1-based, and `points.length`), `interpolation` and `source`. */

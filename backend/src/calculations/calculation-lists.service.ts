@@ -11,7 +11,7 @@ import { calculationSubject, isAnalysisStale } from './calculation.mapper';
 import type { ListCalculationsDto } from './dto/list-calculations.dto';
 
 const POPULATE = ['project.members', 'author', 'reviewer'] as const;
-const LARGE_COLUMNS = ['analysis', 'checks', 'submittedInputs', 'submittedBasis'] as const;
+const LARGE_COLUMNS = ['analysis', 'checks', 'returnedInputs', 'returnedBasis'] as const;
 
 /** The lists of calcs: the firm-wide list behind the dashboard and project pages, and the library. */
 @Injectable()

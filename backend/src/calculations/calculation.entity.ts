@@ -42,8 +42,8 @@ export class Calculation {
     | 'inputsChangedAt'
     | 'reviewer'
     | 'submittedAt'
-    | 'submittedInputs'
-    | 'submittedBasis'
+    | 'returnedInputs'
+    | 'returnedBasis'
     | 'returnedAt'
     | 'lockedAt'
     | 'seal'
@@ -106,12 +106,16 @@ export class Calculation {
   @Property({ type: DateTimeType, nullable: true })
   submittedAt: Date | null = null;
 
-  /** The inputs and basis as last submitted: what a resubmission is compared with. */
+  /**
+   * The inputs and basis of the submission the reviewer last returned (a submitted calc cannot
+   * change, so they are what was submitted): what the designer's edits and the resubmission are
+   * compared with.
+   */
   @Property({ type: 'json', nullable: true })
-  submittedInputs: CalculationInputs | null = null;
+  returnedInputs: CalculationInputs | null = null;
 
   @Property({ type: 'json', nullable: true })
-  submittedBasis: CodeBasisParameters | null = null;
+  returnedBasis: CodeBasisParameters | null = null;
 
   @Property({ type: DateTimeType, nullable: true })
   returnedAt: Date | null = null;
@@ -190,8 +194,6 @@ export class Calculation {
     }
     this.status = 'submitted';
     this.submittedAt = at;
-    this.submittedInputs = structuredClone(this.inputs);
-    this.submittedBasis = this.basis ? structuredClone(this.basis) : null;
   }
 
   /** Reviewer: a submitted calc goes back to its designers as a draft. */
@@ -199,6 +201,8 @@ export class Calculation {
     this.assertSubmitted('returned');
     this.status = 'draft';
     this.returnedAt = at;
+    this.returnedInputs = structuredClone(this.inputs);
+    this.returnedBasis = this.basis ? structuredClone(this.basis) : null;
     this.reviewer = reviewer;
   }
 

@@ -462,8 +462,9 @@ export class CalculationsService {
   }
 
   /**
-   * What changed since the calc was last submitted (its inputs and basis as they went to review)
-   * or since the revision it was made from: storey by storey, field by field.
+   * What changed since the submission the reviewer last returned (its inputs and basis as they
+   * went to review) or since the revision the calc was made from: storey by storey, field by
+   * field.
    */
   async changes(
     ability: AppAbility,
@@ -477,11 +478,14 @@ export class CalculationsService {
     );
     const now = { inputs: calc.inputs, basis: calc.basis };
     if (since === 'submission') {
-      if (!calc.submittedInputs) {
+      // The submission the reviewer returned; a first submission has none yet.
+      if (!calc.returnedInputs) {
         throw new ConflictException(
-          calc.submittedAt
-            ? 'This calculation was submitted before submissions were kept for comparison: nothing to compare with'
-            : 'This calculation has not been submitted yet: nothing to compare with',
+          calc.returnedAt
+            ? 'This calculation was returned before returned submissions were kept: nothing to compare with'
+            : calc.submittedAt
+              ? 'This calculation has not been returned by a reviewer yet: its first submission is the only one, nothing to compare with'
+              : 'This calculation has not been submitted yet: nothing to compare with',
         );
       }
       return {
@@ -489,9 +493,9 @@ export class CalculationsService {
         baseline: {
           calculationId: calc.id,
           revision: calc.revision,
-          at: calc.submittedAt?.toISOString() ?? null,
+          at: calc.returnedAt?.toISOString() ?? null,
         },
-        ...inputChanges({ inputs: calc.submittedInputs, basis: calc.submittedBasis }, now),
+        ...inputChanges({ inputs: calc.returnedInputs, basis: calc.returnedBasis }, now),
       };
     }
     const previous = calc.previousRevision;

@@ -23,6 +23,7 @@ import {
   useSaveCalculation,
 } from '@/features/calculations/api/calculations';
 import { AttachmentsPanel } from '@/features/calculations/components/attachments-panel';
+import { ChangesPanel } from '@/features/calculations/components/changes-panel';
 import { CommentThread } from '@/features/calculations/components/comment-thread';
 import { DeleteDraftButton } from '@/features/calculations/components/delete-draft-button';
 import { DownloadsMenu } from '@/features/calculations/components/downloads-menu';
@@ -113,6 +114,17 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
     );
 
   const result = calc.analysis;
+  const openComments = calc.comments.filter((c) => c.parentId === null && !c.resolved);
+  // Open comments tied to a storey, marked on that storey's row.
+  const storeyComments = new Map<number, string[]>();
+  for (const c of openComments) {
+    if (c.storey !== null) {
+      storeyComments.set(c.storey, [
+        ...(storeyComments.get(c.storey) ?? []),
+        `${c.author.name}: ${c.body}`,
+      ]);
+    }
+  }
   const resultsMatchStoreys =
     result !== null && result.modes[0]?.shape.length === calc.inputs.storeys.length;
 
@@ -126,7 +138,11 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
         <Stack spacing={0.5}>
           <Typography variant="h1">{calc.title}</Typography>
           <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
-            <StatusChip status={calc.status} size="medium" />
+            <StatusChip
+              status={calc.status}
+              size="medium"
+              returnedWithComments={calc.returnedAt ? openComments.length : null}
+            />
             <Typography color="text.secondary">
               Revision {calc.revision} ·{' '}
               {ability.can('read', 'Project') ? (
@@ -229,6 +245,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
               onChange={inputs.setRows}
               readOnly={!editable}
               flags={resultsMatchStoreys && !dirty ? result.plausibility : undefined}
+              comments={storeyComments}
             />
             <AnalysisSettings inputs={inputs} readOnly={!editable} />
           </Section>
@@ -319,6 +336,11 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
               />
               <CommentThread calc={calc} />
             </Stack>
+          </Section>
+        )}
+        {tab === 'Review' && (
+          <Section title="What changed">
+            <ChangesPanel calc={calc} units={units} />
           </Section>
         )}
         {tab === 'Review' && (

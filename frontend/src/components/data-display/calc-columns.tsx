@@ -11,6 +11,9 @@ interface CalcRow extends GridValidRowModel {
   revision: number;
   status: CalculationStatus;
   storeyCount: number;
+  /** Lists of drafts carry these, so a returned draft says so. */
+  returnedAt?: string | null;
+  openComments?: number;
 }
 
 /** The columns every list of calcs starts with: title (opening the calc), project, revision, status, storeys. */
@@ -33,7 +36,12 @@ export function calcColumns<Row extends CalcRow>(): GridColDef<Row>[] {
       field: 'status',
       headerName: 'Status',
       width: 200,
-      renderCell: ({ row }) => <StatusChip status={row.status} />,
+      renderCell: ({ row }) => (
+        <StatusChip
+          status={row.status}
+          returnedWithComments={row.returnedAt ? (row.openComments ?? 0) : null}
+        />
+      ),
     },
     { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 90 },
   ];

@@ -15,14 +15,34 @@ const COLOURS = {
   superseded: 'warning',
 } as const;
 
-/** A calculation's status in words; colour only repeats what the words say. */
+/**
+ * A calculation's status in words; colour only repeats what the words say. A draft the reviewer
+ * sent back reads "Returned with comments (3)", not a plain Draft.
+ */
 export function StatusChip({
   status,
   size = 'small',
+  returnedWithComments = null,
 }: {
   status: CalculationStatus;
   size?: 'small' | 'medium';
+  /** For a returned draft: how many of its comments are still open; null when not returned. */
+  returnedWithComments?: number | null;
 }) {
+  if (status === 'draft' && returnedWithComments !== null) {
+    return (
+      <Chip
+        size={size}
+        color="warning"
+        variant="outlined"
+        label={
+          returnedWithComments > 0
+            ? `Returned with comments (${returnedWithComments})`
+            : 'Returned, comments resolved'
+        }
+      />
+    );
+  }
   return (
     <Chip
       size={size}

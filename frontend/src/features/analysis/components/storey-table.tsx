@@ -4,6 +4,7 @@ import UploadFileIcon from '@mui/icons-material/UploadFile';
 import CalculateIcon from '@mui/icons-material/Calculate';
 import DeleteIcon from '@mui/icons-material/Delete';
 import ContentCopyIcon from '@mui/icons-material/ContentCopy';
+import CommentIcon from '@mui/icons-material/Comment';
 import ReportIcon from '@mui/icons-material/Report';
 import VerticalAlignBottomIcon from '@mui/icons-material/VerticalAlignBottom';
 import { Alert, Box, Button, Stack, Tooltip, Typography } from '@mui/material';
@@ -21,6 +22,7 @@ import {
 } from '@tiermode/shared-types';
 import { useState, type ClipboardEvent } from 'react';
 import {
+  formatNumber,
   fromDisplay,
   massHeader,
   toDisplay,
@@ -47,6 +49,8 @@ interface StoreyTableProps {
   readOnly?: boolean;
   /** Implausible results of the last analysis, each marked on its storey's row. */
   flags?: PlausibilityFlag[];
+  /** Open review comments tied to a storey, marked on its row: storey number -> the comments. */
+  comments?: Map<number, string[]>;
 }
 
 type DisplayRow = StoreyRow & { number: number };
@@ -61,6 +65,7 @@ export function StoreyTable({
   onChange,
   readOnly = false,
   flags = [],
+  comments = new Map<number, string[]>(),
 }: StoreyTableProps) {
   const apiRef = useGridApiRef();
   const [pasting, setPasting] = useState(false);
@@ -86,6 +91,9 @@ export function StoreyTable({
       Number.isFinite(row[field])
         ? Number(toDisplay(units, quantity, row[field]).toPrecision(10))
         : null,
+    // Six significant figures on screen (723,012 kN/m, not 723,012.267); editing, copying and
+    // "Copy the table" keep every digit.
+    valueFormatter: (value: number | null) => (value === null ? '' : formatNumber(value, 6)),
     valueSetter: (value, row) => {
       const shown = toNumber(value);
       return {
@@ -159,21 +167,32 @@ export function StoreyTable({
       width: 80,
       type: 'number',
       sortable: false,
-      renderCell: ({ row }) =>
-        flagged.has(row.number) ? (
-          <Tooltip title={flagged.get(row.number)}>
-            <Box
-              component="span"
-              sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, color: 'error.main' }}
-              aria-label={`Storey ${row.number}: ${flagged.get(row.number)}`}
-            >
-              <ReportIcon fontSize="small" />
-              {row.number}
-            </Box>
-          </Tooltip>
-        ) : (
-          row.number
-        ),
+      renderCell: ({ row }) => {
+        const said = comments.get(row.number);
+        return (
+          <Box component="span" sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5 }}>
+            {flagged.has(row.number) && (
+              <Tooltip describeChild title={flagged.get(row.number)}>
+                <ReportIcon
+                  fontSize="small"
+                  color="error"
+                  titleAccess={`Storey ${row.number}: ${flagged.get(row.number)}`}
+                />
+              </Tooltip>
+            )}
+            {said && (
+              <Tooltip describeChild title={said.join(' · ')}>
+                <CommentIcon
+                  fontSize="small"
+                  color="info"
+                  titleAccess={`Storey ${row.number}: ${said.length} open comment${said.length > 1 ? 's' : ''}`}
+                />
+              </Tooltip>
+            )}
+            {row.number}
+          </Box>
+        );
+      },
     },
     {
       field: 'label',
@@ -241,12 +260,19 @@ export function StoreyTable({
           height: Math.min(460, 110 + rows.length * 52),
           '& .cell-invalid': { bgcolor: 'error.light', color: 'error.contrastText' },
           '& .row-flagged': { boxShadow: (t) => `inset 4px 0 0 ${t.palette.error.main}` },
+          '& .row-commented': { boxShadow: (t) => `inset 4px 0 0 ${t.palette.info.main}` },
         }}
       >
         <DataGrid
           apiRef={apiRef}
           ignoreValueFormatterDuringExport
-          getRowClassName={({ row }) => (flagged.has(row.number) ? 'row-flagged' : '')}
+          getRowClassName={({ row }) =>
+            flagged.has(row.number)
+              ? 'row-flagged'
+              : comments.has(row.number)
+                ? 'row-commented'
+                : ''
+          }
           aria-label="Storey table"
           rows={rows.map((row, i) => ({ ...row, number: i + 1 }))}
           columns={columns}

@@ -2,6 +2,7 @@ import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tansta
 import type {
   AnalysisResponse,
   AuditEventDto,
+  CalculationChanges,
   CalculationDto,
   CalculationInputs,
   CalculationListQuery,
@@ -44,6 +45,17 @@ export function useSeal(id: string, enabled: boolean) {
     queryKey: calculationKeys.seal(id),
     queryFn: async () => (await api.get<SealCheckResponse>(`/calculations/${id}/seal`)).data,
     enabled,
+  });
+}
+
+/** What changed since the last submission or the previous revision (null: not asked). */
+export function useChanges(id: string, since: 'submission' | 'revision' | null) {
+  return useQuery({
+    queryKey: [...calculationKeys.one(id), 'changes', since] as const,
+    queryFn: async () =>
+      (await api.get<CalculationChanges>(`/calculations/${id}/changes`, { params: { since } }))
+        .data,
+    enabled: since !== null,
   });
 }
 

@@ -16,6 +16,7 @@ const ACTION_WORDS: Record<string, string> = {
   locked: 'Locked and sealed',
   revised: 'Revision started',
   commented: 'Commented',
+  replied: 'Replied to a comment',
   'comment resolved': 'Comment resolved',
   'comment reopened': 'Comment reopened',
 };
@@ -34,7 +35,14 @@ const columns: GridColDef<AuditEventDto>[] = [
     headerName: 'What',
     flex: 1,
     minWidth: 200,
-    valueFormatter: (value: string) => ACTION_WORDS[value] ?? value,
+    // An edit names what it changed: "Inputs or title changed: storey 2 mass, spectrum points".
+    valueGetter: (_value, row) => {
+      const words = ACTION_WORDS[row.action] ?? row.action;
+      const changes = row.detail?.changes;
+      return Array.isArray(changes) && changes.length > 0
+        ? `${words}: ${changes.map(String).join(', ')}`
+        : words;
+    },
   },
   {
     field: 'hash',

@@ -7,6 +7,7 @@ import {
   DialogContent,
   DialogContentText,
   DialogTitle,
+  Link,
   Stack,
   TextField,
   Typography,
@@ -14,6 +15,7 @@ import {
 import type { CalculationDto, UserDto } from '@tiermode/shared-types';
 import { useFormik } from 'formik';
 import { useState } from 'react';
+import { Link as RouterLink } from 'react-router';
 import * as yup from 'yup';
 import { canOn, useAppAbility } from '@/lib/ability';
 import { errorMessages } from '@/lib/api-client';
@@ -173,7 +175,22 @@ export function ReviewActions({ calc, user, dirty, onRevised }: Props) {
       {calc.status === 'submitted' && user.role === 'designer' && (
         <Alert severity="info">Submitted for review: waiting for a reviewer.</Alert>
       )}
-      {calc.status === 'locked' && may('revise') && (
+      {calc.nextRevision && (
+        <Alert severity="info" aria-label="Next revision">
+          Revision {calc.nextRevision.revision} of this calc exists (
+          {calc.nextRevision.status === 'draft'
+            ? 'a draft'
+            : calc.nextRevision.status === 'submitted'
+              ? 'under review'
+              : calc.nextRevision.status}
+          ):{' '}
+          <Link component={RouterLink} to={`/calculations/${calc.nextRevision.id}`}>
+            open revision {calc.nextRevision.revision}
+          </Link>
+          .
+        </Alert>
+      )}
+      {calc.status === 'locked' && !calc.nextRevision && may('revise') && (
         <Stack spacing={1}>
           <Typography>
             This calc is sealed and will never change. To change anything, start a new revision: a
