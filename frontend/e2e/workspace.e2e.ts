@@ -192,4 +192,31 @@ describe("The designer's workspace", () => {
     });
     await close();
   });
+
+  it('saves what the quick analysis shows as a new calc in a project', async () => {
+    const { page, close } = await newPage(browser);
+    await signIn(page, 'designer');
+    await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+    await nav(page, 'Quick analysis');
+    await page.getByRole('table', { name: 'Modes' }).waitFor();
+    // An invented plant floor: 515 t at storey 2.
+    await editStorey(page, 2, 'mass', '515');
+    await page.getByRole('button', { name: 'Save as a calc' }).click();
+    const dialog = page.getByRole('dialog', { name: 'New calculation' });
+    await dialog.getByRole('button', { name: 'Create the draft' }).click();
+    await dialog.getByText('Choose the project the calc belongs to').waitFor();
+    await dialog.getByRole('combobox', { name: 'Project' }).click();
+    await page.getByRole('option', { name: PROJECT }).click();
+    await dialog.getByLabel('Title').fill('Plant floor, from the quick analysis');
+    await screenshot(page, 'workspace-quick-analysis-save');
+    await dialog.getByRole('button', { name: 'Create the draft' }).click();
+    await page.getByRole('heading', { name: 'Plant floor, from the quick analysis' }).waitFor();
+    const row = page
+      .getByRole('grid', { name: 'Storey table' })
+      .getByRole('row')
+      .filter({ has: page.getByRole('gridcell', { name: '2', exact: true }) });
+    expect(await row.locator('[data-field="mass"]').textContent()).toBe('515');
+    expect(await status(page)).toBe('All changes saved');
+    await close();
+  });
 });

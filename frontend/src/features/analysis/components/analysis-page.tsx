@@ -1,6 +1,10 @@
-import { Alert, Box, LinearProgress, Stack, Typography } from '@mui/material';
+import SaveIcon from '@mui/icons-material/Save';
+import { Alert, Box, Button, LinearProgress, Stack, Typography } from '@mui/material';
 import { useState } from 'react';
+import { useNavigate } from 'react-router';
 import { CautionBanner } from '@/components/feedback/caution-banner';
+import { NewCalculationDialog } from '@/features/calculations/components/new-calculation-dialog';
+import { useAppAbility } from '@/lib/ability';
 import { errorMessages } from '@/lib/api-client';
 import '@/lib/charts';
 import type { UnitSystem } from '@/lib/units';
@@ -23,6 +27,9 @@ export function AnalysisPage() {
   const analysis = useAnalysis(settled);
   const result = analysis.data?.result;
   const stale = analysis.isFetching || settled !== request;
+  const ability = useAppAbility();
+  const navigate = useNavigate();
+  const [saving, setSaving] = useState(false);
 
   return (
     <Stack spacing={2}>
@@ -31,12 +38,24 @@ export function AnalysisPage() {
         sx={{ alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap', gap: 1 }}
       >
         <Typography variant="h1">Analysis</Typography>
-        <UnitsToggle units={units} onChange={setUnits} />
+        <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+          {ability.can('create', 'Calculation') && (
+            <Button
+              variant="outlined"
+              startIcon={<SaveIcon />}
+              disabled={request === null}
+              onClick={() => setSaving(true)}
+            >
+              Save as a calc
+            </Button>
+          )}
+          <UnitsToggle units={units} onChange={setUnits} />
+        </Stack>
       </Stack>
       <Typography color="text.secondary">
         A planar shear building: floors rigid, one horizontal direction, linear elastic, fixed base,
-        one damping ratio for every mode. Nothing here is saved; the results follow the inputs as
-        you type. To keep a calc and send it for review, create it in a project.
+        one damping ratio for every mode. Nothing here is saved until you save it as a calc in a
+        project; the results follow the inputs as you type.
       </Typography>
       <CautionBanner />
 
@@ -76,6 +95,15 @@ export function AnalysisPage() {
 
       {result && analysis.data && (
         <AnalysisResults result={result} storeys={analysis.data.inputs.storeys} units={units} />
+      )}
+      {saving && request && (
+        <NewCalculationDialog
+          inputs={request}
+          displayUnits={units}
+          intro="The calc starts as a draft with the storeys, spectrum and settings on this page, in the project you choose."
+          onClose={() => setSaving(false)}
+          onCreated={(calc) => void navigate(`/calculations/${calc.id}`)}
+        />
       )}
     </Stack>
   );
