@@ -33,13 +33,13 @@ export async function launchBrowser(): Promise<Browser> {
  */
 export async function newPage(
   browser: Browser,
-  options: { bypassCSP?: boolean } = {},
+  options: { bypassCSP?: boolean; viewport?: { width: number; height: number } } = {},
 ): Promise<{ context: BrowserContext; page: Page; close: () => Promise<void> }> {
   const context = await browser.newContext({
     // Only for injecting axe-core; every other journey runs under the app's real CSP.
     bypassCSP: options.bypassCSP ?? false,
     baseURL: inject('baseURL'),
-    viewport: { width: 1366, height: 860 },
+    viewport: options.viewport ?? { width: 1366, height: 860 },
   });
   const page = await context.newPage();
   const problems: string[] = [];

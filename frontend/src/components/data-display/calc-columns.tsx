@@ -22,20 +22,20 @@ export function calcColumns<Row extends CalcRow>(): GridColDef<Row>[] {
     {
       field: 'title',
       headerName: 'Calculation',
-      flex: 2,
-      minWidth: 220,
+      flex: 3,
+      minWidth: 300,
       renderCell: ({ row }) => (
         <Link component={RouterLink} to={`/calculations/${row.id}`}>
           {row.title}
         </Link>
       ),
     },
-    { field: 'projectName', headerName: 'Project', flex: 1.5, minWidth: 170 },
-    { field: 'revision', headerName: 'Revision', type: 'number', width: 90 },
+    { field: 'projectName', headerName: 'Project', flex: 1.5, minWidth: 160 },
+    { field: 'revision', headerName: 'Revision', type: 'number', width: 85 },
     {
       field: 'status',
       headerName: 'Status',
-      width: 200,
+      width: 195,
       renderCell: ({ row }) => (
         <StatusChip
           status={row.status}
@@ -43,6 +43,6 @@ export function calcColumns<Row extends CalcRow>(): GridColDef<Row>[] {
         />
       ),
     },
-    { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 90 },
+    { field: 'storeyCount', headerName: 'Storeys', type: 'number', width: 85 },
   ];
 }

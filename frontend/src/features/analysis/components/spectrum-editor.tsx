@@ -68,6 +68,7 @@ export function SpectrumEditor({
         key="delete"
         icon={<DeleteIcon />}
         label={`Delete point ${row.id + 1}`}
+        title={`Delete point ${row.id + 1}`}
         onClick={() => setPoints(spectrum.points.filter((_, i) => i !== row.id))}
       />,
     ],

@@ -216,6 +216,7 @@ export function StoreyTable({
         key="columns"
         icon={<CalculateIcon />}
         label={`Stiffness of storey ${row.number} from its columns`}
+        title={`Stiffness of storey ${row.number} from its columns`}
         disabled={!(row.height > 0)}
         onClick={() => setColumnsFor(row.number - 1)}
       />,
@@ -223,12 +224,14 @@ export function StoreyTable({
         key="insert"
         icon={<VerticalAlignBottomIcon />}
         label={`Insert a storey below storey ${row.number}`}
+        title={`Insert a storey below storey ${row.number}`}
         onClick={() => insertBelow(row.number - 1)}
       />,
       <GridActionsCellItem
         key="delete"
         icon={<DeleteIcon />}
         label={`Delete storey ${row.number}`}
+        title={`Delete storey ${row.number}`}
         disabled={rows.length === 1}
         onClick={() => onChange(rows.filter((r) => r.id !== row.id))}
       />,
@@ -239,7 +242,7 @@ export function StoreyTable({
   return (
     <Stack spacing={1}>
       {!readOnly && (
-        <Stack direction="row" spacing={1}>
+        <Stack direction="row" spacing={1} useFlexGap sx={{ flexWrap: 'wrap' }}>
           <Button startIcon={<AddIcon />} onClick={() => insertBelow(rows.length)}>
             Add a storey on top
           </Button>

@@ -13,19 +13,19 @@ const columns: GridColDef<CalculationSummaryDto>[] = [
   {
     field: 'author',
     headerName: 'Author',
-    width: 150,
+    width: 130,
     valueGetter: (_v, row) => row.author.name,
   },
   {
     field: 'reviewer',
     headerName: 'Reviewer',
-    width: 150,
+    width: 130,
     valueGetter: (_v, row) => row.reviewer?.name ?? '',
   },
   {
     field: 'updatedAt',
     headerName: 'Last change',
-    width: 130,
+    width: 110,
     valueFormatter: (value: string) => date(value),
   },
 ];
@@ -52,7 +52,11 @@ export function CalculationList({
         rows={rows}
         columns={columns}
         loading={calcs.isPending}
-        columnVisibilityModel={{ projectName: !hideProject }}
+        // A column empty in every row gives its room to the titles.
+        columnVisibilityModel={{
+          projectName: !hideProject,
+          reviewer: rows.some((r) => r.reviewer !== null),
+        }}
         disableRowSelectionOnClick
         hideFooter={rows.length <= 100}
         localeText={{ noRowsLabel: empty }}

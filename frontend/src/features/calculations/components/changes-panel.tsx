@@ -1,3 +1,4 @@
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import {
   alpha,
   Alert,
@@ -7,7 +8,6 @@ import {
   Table,
   TableBody,
   TableCell,
-  TableContainer,
   TableHead,
   TableRow,
   TextField,
@@ -92,7 +92,7 @@ export function ChangesPanel({ calc, units }: { calc: CalculationDto; units: Uni
     );
   }
   return (
-    <Box sx={{ display: 'grid', gap: 1.5 }}>
+    <Box sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: 'minmax(0, 1fr)' }}>
       <TextField
         select
         size="small"
@@ -145,7 +145,7 @@ function ChangesView({
       <Typography variant="body2">
         {changes.storeys.length} storey(s) changed; marked cells read old → new.
       </Typography>
-      <TableContainer sx={{ maxHeight: 420 }}>
+      <ScrollFrame label="Changes by storey, scrolling" maxHeight={420}>
         <Table size="small" stickyHeader aria-label="Changes by storey">
           <TableHead>
             <TableRow>
@@ -206,7 +206,7 @@ function ChangesView({
             })}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ScrollFrame>
       <FieldList title="Design spectrum" changes={changes.spectrum} />
       <FieldList title="Code basis" changes={changes.basis} />
       <FieldList title="Damping and modes" changes={changes.settings} />

@@ -1,3 +1,4 @@
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import {
   Alert,
   AlertTitle,
@@ -67,45 +68,47 @@ export function ChecksResults({
         <Typography variant="h3" gutterBottom>
           Equivalent lateral force and modal base shear
         </Typography>
-        <Table size="small" sx={{ maxWidth: 720 }}>
-          <TableBody>
-            <TableRow>
-              <TableCell>Period used for ELF</TableCell>
-              <TableCell align="right">
-                {checks.elf.period.toFixed(3)} s
-                {checks.elf.capped
-                  ? ` (computed ${checks.elf.computedPeriod.toFixed(3)} s, capped at Cu Ta)`
-                  : ''}
-              </TableCell>
-            </TableRow>
-            {checks.elf.csGoverns && (
+        <ScrollFrame label="Equivalent lateral force, scrolling">
+          <Table size="small" sx={{ maxWidth: 720 }}>
+            <TableBody>
               <TableRow>
-                <TableCell>Cs</TableCell>
+                <TableCell>Period used for ELF</TableCell>
                 <TableCell align="right">
-                  {checks.elf.cs.toFixed(4)} ({checks.elf.csGoverns} governs)
+                  {checks.elf.period.toFixed(3)} s
+                  {checks.elf.capped
+                    ? ` (computed ${checks.elf.computedPeriod.toFixed(3)} s, capped at Cu Ta)`
+                    : ''}
                 </TableCell>
               </TableRow>
-            )}
-            <TableRow>
-              <TableCell>ELF base shear V ({checks.elf.clause})</TableCell>
-              <TableCell align="right">{force(checks.elf.baseShear)}</TableCell>
-            </TableRow>
-            <TableRow>
-              <TableCell>Modal base shear Vt</TableCell>
-              <TableCell align="right">{force(checks.modalBaseShear)}</TableCell>
-            </TableRow>
-            <TableRow>
-              <TableCell>Scale factor for forces</TableCell>
-              <TableCell align="right" aria-label="Scale factor">
-                {checks.scaleFactor.toFixed(3)}
-              </TableCell>
-            </TableRow>
-            <TableRow>
-              <TableCell>Scale factor for drifts</TableCell>
-              <TableCell align="right">{checks.driftScaleFactor.toFixed(3)}</TableCell>
-            </TableRow>
-          </TableBody>
-        </Table>
+              {checks.elf.csGoverns && (
+                <TableRow>
+                  <TableCell>Cs</TableCell>
+                  <TableCell align="right">
+                    {checks.elf.cs.toFixed(4)} ({checks.elf.csGoverns} governs)
+                  </TableCell>
+                </TableRow>
+              )}
+              <TableRow>
+                <TableCell>ELF base shear V ({checks.elf.clause})</TableCell>
+                <TableCell align="right">{force(checks.elf.baseShear)}</TableCell>
+              </TableRow>
+              <TableRow>
+                <TableCell>Modal base shear Vt</TableCell>
+                <TableCell align="right">{force(checks.modalBaseShear)}</TableCell>
+              </TableRow>
+              <TableRow>
+                <TableCell>Scale factor for forces</TableCell>
+                <TableCell align="right" aria-label="Scale factor">
+                  {checks.scaleFactor.toFixed(3)}
+                </TableCell>
+              </TableRow>
+              <TableRow>
+                <TableCell>Scale factor for drifts</TableCell>
+                <TableCell align="right">{checks.driftScaleFactor.toFixed(3)}</TableCell>
+              </TableRow>
+            </TableBody>
+          </Table>
+        </ScrollFrame>
       </Box>
       <Box component="section" aria-label="Storey values for design">
         <Typography variant="h3" gutterBottom>
@@ -138,44 +141,48 @@ export function ChecksResults({
             Every storey's design drift is within the limit.
           </Alert>
         )}
-        <Table size="small" aria-label="Storey checks">
-          <TableHead>
-            <TableRow>
-              <TableCell>Storey</TableCell>
-              <TableCell align="right">Design drift / height</TableCell>
-              <TableCell align="right">Limit</TableCell>
-              <TableCell>Drift</TableCell>
-              <TableCell align="right">Theta</TableCell>
-              <TableCell align="right">Theta max</TableCell>
-              <TableCell>P-delta</TableCell>
-              <TableCell align="right">ELF force ({unitLabel(units, 'force')})</TableCell>
-              <TableCell align="right">Shear, unscaled ({unitLabel(units, 'force')})</TableCell>
-              <TableCell align="right">Shear, scaled ({unitLabel(units, 'force')})</TableCell>
-            </TableRow>
-          </TableHead>
-          <TableBody>
-            {checks.storeys.map((s) => (
-              <TableRow key={s.storey}>
-                <TableCell>{s.storey}</TableCell>
-                <TableCell align="right">{s.designDriftRatio.toFixed(5)}</TableCell>
-                <TableCell align="right">{s.driftLimitRatio.toFixed(4)}</TableCell>
-                <TableCell>{PASS(s.driftOk)}</TableCell>
-                <TableCell align="right">{s.theta.toFixed(4)}</TableCell>
-                <TableCell align="right">{s.thetaMax.toFixed(3)}</TableCell>
-                <TableCell>{s.pDelta}</TableCell>
-                <TableCell align="right">
-                  {s.elfForce === null ? '-' : formatNumber(toDisplay(units, 'force', s.elfForce))}
-                </TableCell>
-                <TableCell align="right">
-                  {formatNumber(toDisplay(units, 'force', s.modalShear))}
-                </TableCell>
-                <TableCell align="right">
-                  {formatNumber(toDisplay(units, 'force', s.scaledShear))}
-                </TableCell>
+        <ScrollFrame label="Storey checks, scrolling">
+          <Table size="small" aria-label="Storey checks">
+            <TableHead>
+              <TableRow>
+                <TableCell>Storey</TableCell>
+                <TableCell align="right">Design drift / height</TableCell>
+                <TableCell align="right">Limit</TableCell>
+                <TableCell>Drift</TableCell>
+                <TableCell align="right">Theta</TableCell>
+                <TableCell align="right">Theta max</TableCell>
+                <TableCell>P-delta</TableCell>
+                <TableCell align="right">ELF force ({unitLabel(units, 'force')})</TableCell>
+                <TableCell align="right">Shear, unscaled ({unitLabel(units, 'force')})</TableCell>
+                <TableCell align="right">Shear, scaled ({unitLabel(units, 'force')})</TableCell>
               </TableRow>
-            ))}
-          </TableBody>
-        </Table>
+            </TableHead>
+            <TableBody>
+              {checks.storeys.map((s) => (
+                <TableRow key={s.storey}>
+                  <TableCell>{s.storey}</TableCell>
+                  <TableCell align="right">{s.designDriftRatio.toFixed(5)}</TableCell>
+                  <TableCell align="right">{s.driftLimitRatio.toFixed(4)}</TableCell>
+                  <TableCell>{PASS(s.driftOk)}</TableCell>
+                  <TableCell align="right">{s.theta.toFixed(4)}</TableCell>
+                  <TableCell align="right">{s.thetaMax.toFixed(3)}</TableCell>
+                  <TableCell>{s.pDelta}</TableCell>
+                  <TableCell align="right">
+                    {s.elfForce === null
+                      ? '-'
+                      : formatNumber(toDisplay(units, 'force', s.elfForce))}
+                  </TableCell>
+                  <TableCell align="right">
+                    {formatNumber(toDisplay(units, 'force', s.modalShear))}
+                  </TableCell>
+                  <TableCell align="right">
+                    {formatNumber(toDisplay(units, 'force', s.scaledShear))}
+                  </TableCell>
+                </TableRow>
+              ))}
+            </TableBody>
+          </Table>
+        </ScrollFrame>
         <Box
           sx={{ height: 320, maxWidth: 640, mt: 2 }}
           role="img"

@@ -1,12 +1,5 @@
-import {
-  Table,
-  TableBody,
-  TableCell,
-  TableContainer,
-  TableHead,
-  TableRow,
-  Typography,
-} from '@mui/material';
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
+import { Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import type { CombinedResponse, DesignStoreyValues, StoreyInput } from '@tiermode/shared-types';
 import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem } from '@/lib/units';
 
@@ -45,7 +38,7 @@ export function DesignStoreyTable({
         {formatNumber(design.forceFactor)}, displacements x{' '}
         {formatNumber(design.displacementFactor)}.
       </Typography>
-      <TableContainer sx={{ maxHeight: 480 }}>
+      <ScrollFrame label="Design storey values, scrolling" maxHeight={480}>
         <Table size="small" stickyHeader aria-label="Design storey values">
           <TableHead>
             <TableRow>
@@ -86,7 +79,7 @@ export function DesignStoreyTable({
             ))}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ScrollFrame>
     </>
   );
 }

@@ -53,12 +53,14 @@ export function UsersPage() {
           key="edit"
           icon={<EditIcon />}
           label={`Edit ${row.name}`}
+          title={`Edit ${row.name}`}
           onClick={() => setDialog({ mode: 'edit', user: row })}
         />,
         <GridActionsCellItem
           key="link"
           icon={<EmailOutlinedIcon />}
           label={`Mail ${row.name} a new set-password link`}
+          title={`Mail ${row.name} a new set-password link`}
           disabled={!row.active || sendLink.isPending}
           onClick={() => sendLink.mutate(row)}
         />,

@@ -1,3 +1,4 @@
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import CheckCircleIcon from '@mui/icons-material/CheckCircle';
 import ErrorIcon from '@mui/icons-material/Error';
 import {
@@ -51,30 +52,32 @@ export function VerificationPage() {
             <Typography variant="body2" sx={{ mb: 1 }}>
               <strong>Inputs:</strong> {c.inputs.join('; ')}
             </Typography>
-            <Table size="small" aria-label={`${c.title}: values`}>
-              <TableHead>
-                <TableRow>
-                  <TableCell>Quantity</TableCell>
-                  <TableCell align="right">Expected</TableCell>
-                  <TableCell align="right">Computed now</TableCell>
-                  <TableCell align="right">Difference (relative)</TableCell>
-                  <TableCell align="right">Tolerance</TableCell>
-                  <TableCell align="right">Result</TableCell>
-                </TableRow>
-              </TableHead>
-              <TableBody>
-                {c.rows.map((row) => (
-                  <TableRow key={row.quantity}>
-                    <TableCell>{row.quantity}</TableCell>
-                    <TableCell align="right">{formatNumber(row.expected, 8)}</TableCell>
-                    <TableCell align="right">{formatNumber(row.computed, 8)}</TableCell>
-                    <TableCell align="right">{row.difference.toExponential(1)}</TableCell>
-                    <TableCell align="right">{row.tolerance.toExponential(0)}</TableCell>
-                    <TableCell align="right">{row.pass ? 'Pass' : 'Fail'}</TableCell>
+            <ScrollFrame label={`${c.title}: values, scrolling`}>
+              <Table size="small" aria-label={`${c.title}: values`}>
+                <TableHead>
+                  <TableRow>
+                    <TableCell>Quantity</TableCell>
+                    <TableCell align="right">Expected</TableCell>
+                    <TableCell align="right">Computed now</TableCell>
+                    <TableCell align="right">Difference (relative)</TableCell>
+                    <TableCell align="right">Tolerance</TableCell>
+                    <TableCell align="right">Result</TableCell>
                   </TableRow>
-                ))}
-              </TableBody>
-            </Table>
+                </TableHead>
+                <TableBody>
+                  {c.rows.map((row) => (
+                    <TableRow key={row.quantity}>
+                      <TableCell>{row.quantity}</TableCell>
+                      <TableCell align="right">{formatNumber(row.expected, 8)}</TableCell>
+                      <TableCell align="right">{formatNumber(row.computed, 8)}</TableCell>
+                      <TableCell align="right">{row.difference.toExponential(1)}</TableCell>
+                      <TableCell align="right">{row.tolerance.toExponential(0)}</TableCell>
+                      <TableCell align="right">{row.pass ? 'Pass' : 'Fail'}</TableCell>
+                    </TableRow>
+                  ))}
+                </TableBody>
+              </Table>
+            </ScrollFrame>
             <Typography variant="caption" color="text.secondary">
               Engine version {c.engineVersion}
             </Typography>

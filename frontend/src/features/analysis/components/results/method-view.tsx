@@ -1,10 +1,10 @@
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import {
   Box,
   MenuItem,
   Table,
   TableBody,
   TableCell,
-  TableContainer,
   TableHead,
   TableRow,
   TextField,
@@ -24,14 +24,13 @@ const G = 9.80665;
 /** 1 kip s^2/in = 4448.2216152605 N / 0.0254 m/s^2, in kg: the US mass unit that pairs with kip/in. */
 const KIP_S2_PER_IN = 4448.2216152605 / 0.0254;
 
-const SCROLL = { maxHeight: 380 } as const;
 const mono = { fontFamily: 'monospace' } as const;
 
 function Matrix({ label, values }: { label: string; values: string[][] }) {
   return (
-    <Box>
+    <Box sx={{ minWidth: 0, maxWidth: '100%' }}>
       <Typography variant="subtitle2">{label}</Typography>
-      <TableContainer sx={SCROLL}>
+      <ScrollFrame label={`${label}, scrolling`} maxHeight={380}>
         <Table size="small" aria-label={label} sx={{ width: 'auto' }}>
           <TableBody>
             {values.map((row, i) => (
@@ -45,7 +44,7 @@ function Matrix({ label, values }: { label: string; values: string[][] }) {
             ))}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ScrollFrame>
     </Box>
   );
 }
@@ -88,7 +87,7 @@ export function MethodView({
   const mn = mode ? rows.reduce((sum, r, i) => sum + r.mass * mode.shape[i] ** 2, 0) : 0;
 
   return (
-    <Box sx={{ display: 'grid', gap: 2 }}>
+    <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: 'minmax(0, 1fr)' }}>
       <Typography>
         Storey 1 is the first row and column. M is in {massUnit} and K in {kUnit}, so ω² comes out
         in 1/s²; ground motion is along the building, r = [1 … 1]. Solve K φ = ω² M φ; for each mode
@@ -114,7 +113,7 @@ export function MethodView({
             M and K row by row ({n} storeys). M is diagonal and K tridiagonal: every entry not shown
             is 0.
           </Typography>
-          <TableContainer sx={SCROLL}>
+          <ScrollFrame label="M and K by row, scrolling" maxHeight={380}>
             <Table size="small" stickyHeader aria-label="M and K by row">
               <TableHead>
                 <TableRow>
@@ -145,10 +144,10 @@ export function MethodView({
                 ))}
               </TableBody>
             </Table>
-          </TableContainer>
+          </ScrollFrame>
         </Box>
       )}
-      <TableContainer sx={SCROLL}>
+      <ScrollFrame label="Modal values, scrolling" maxHeight={380}>
         <Table size="small" stickyHeader aria-label="Modal values">
           <TableHead>
             <TableRow>
@@ -182,13 +181,13 @@ export function MethodView({
             ))}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ScrollFrame>
 
       {mode && (
         <Box
           component="section"
           aria-label="One mode, step by step"
-          sx={{ display: 'grid', gap: 1 }}
+          sx={{ display: 'grid', gap: 1, gridTemplateColumns: 'minmax(0, 1fr)' }}
         >
           <TextField
             select
@@ -227,7 +226,7 @@ export function MethodView({
             shear, is M* Aₙ = {formatNumber(toDisplay(units, 'force', mode.response.baseShear))}{' '}
             {force}.
           </Typography>
-          <TableContainer sx={SCROLL}>
+          <ScrollFrame label={`Mode ${mode.number}, level by level, scrolling`} maxHeight={380}>
             <Table size="small" stickyHeader aria-label={`Mode ${mode.number}, level by level`}>
               <TableHead>
                 <TableRow>
@@ -271,7 +270,7 @@ export function MethodView({
                 </TableRow>
               </TableBody>
             </Table>
-          </TableContainer>
+          </ScrollFrame>
         </Box>
       )}
       <Typography>

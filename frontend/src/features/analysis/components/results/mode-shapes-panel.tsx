@@ -1,3 +1,4 @@
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import {
   Autocomplete,
   Box,
@@ -5,7 +6,6 @@ import {
   Table,
   TableBody,
   TableCell,
-  TableContainer,
   TableHead,
   TableRow,
   TextField,
@@ -38,7 +38,7 @@ export function ModeShapesPanel({
   const levels = elevationsOf(storeys).slice(0, modes[0]?.shape.length);
   const notes = shown.filter((m) => shapeNormalisationNote(m));
   return (
-    <Box sx={{ display: 'grid', gap: 2 }}>
+    <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: 'minmax(0, 1fr)' }}>
       <Autocomplete
         multiple
         size="small"
@@ -71,7 +71,7 @@ export function ModeShapesPanel({
         </Box>
       )}
       {shown.length > 0 && (
-        <TableContainer sx={{ maxHeight: 420 }}>
+        <ScrollFrame label="Mode shape values, scrolling" maxHeight={420}>
           <Table size="small" stickyHeader aria-label="Mode shape values">
             <TableHead>
               <TableRow>
@@ -106,7 +106,7 @@ export function ModeShapesPanel({
                 ))}
             </TableBody>
           </Table>
-        </TableContainer>
+        </ScrollFrame>
       )}
       <Typography variant="caption" color="text.secondary">
         Shapes are +1 at the roof

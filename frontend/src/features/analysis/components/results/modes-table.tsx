@@ -1,19 +1,12 @@
-import {
-  Table,
-  TableBody,
-  TableCell,
-  TableContainer,
-  TableHead,
-  TableRow,
-  Typography,
-} from '@mui/material';
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
+import { Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { shapeNormalisationNote, type ModeResult } from '@tiermode/shared-types';
 import { formatNumber } from '@/lib/units';
 
 /** Periods, frequencies, participation and effective masses, one mode a row. */
 export function ModesTable({ modes }: { modes: ModeResult[] }) {
   return (
-    <TableContainer>
+    <ScrollFrame label="Modes, scrolling">
       <Table size="small" aria-label="Modes">
         <TableHead>
           <TableRow>
@@ -47,6 +40,6 @@ export function ModesTable({ modes }: { modes: ModeResult[] }) {
           ))}
         </TableBody>
       </Table>
-    </TableContainer>
+    </ScrollFrame>
   );
 }

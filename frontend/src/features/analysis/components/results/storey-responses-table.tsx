@@ -1,9 +1,9 @@
+import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import {
   MenuItem,
   Table,
   TableBody,
   TableCell,
-  TableContainer,
   TableHead,
   TableRow,
   TextField,
@@ -76,7 +76,7 @@ export function StoreyResponsesTable({
           </MenuItem>
         ))}
       </TextField>
-      <TableContainer sx={{ maxHeight: 480 }}>
+      <ScrollFrame label="Storey responses, scrolling" maxHeight={480}>
         <Table size="small" stickyHeader aria-label="Storey responses">
           <TableHead>
             <TableRow>
@@ -115,7 +115,7 @@ export function StoreyResponsesTable({
             </TableRow>
           </TableBody>
         </Table>
-      </TableContainer>
+      </ScrollFrame>
     </>
   );
 }
