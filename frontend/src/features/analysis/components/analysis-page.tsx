@@ -1,10 +1,7 @@
-import SaveIcon from '@mui/icons-material/Save';
-import { Alert, Box, Button, LinearProgress, Stack, Typography } from '@mui/material';
-import { useState } from 'react';
-import { useNavigate } from 'react-router';
+import { Alert, Box, LinearProgress, Stack, Typography } from '@mui/material';
+import type { AnalysisRequest } from '@tiermode/shared-types';
+import { useState, type ReactNode } from 'react';
 import { CautionBanner } from '@/components/feedback/caution-banner';
-import { NewCalculationDialog } from '@/features/calculations/components/new-calculation-dialog';
-import { useAppAbility } from '@/lib/ability';
 import { errorMessages } from '@/lib/api-client';
 import '@/lib/charts';
 import type { UnitSystem } from '@/lib/units';
@@ -18,8 +15,16 @@ import { SpectrumEditor } from './spectrum-editor';
 import { StoreyTable } from './storey-table';
 import { UnitsToggle } from './units-toggle';
 
-/** The stateless analysis: storey table and spectrum in, modes and responses out as you type. */
-export function AnalysisPage() {
+/**
+ * The stateless analysis: storey table and spectrum in, modes and responses out as you type.
+ * `saveAction` draws what saves the inputs on screen elsewhere (the route composes it: a new calc
+ * in a project), given the valid inputs or null and the units shown.
+ */
+export function AnalysisPage({
+  saveAction,
+}: {
+  saveAction?: (request: AnalysisRequest | null, units: UnitSystem) => ReactNode;
+}) {
   const inputs = useAnalysisInputs(STARTING_INPUTS);
   const [units, setUnits] = useState<UnitSystem>('SI');
   const { request } = inputs;
@@ -27,9 +32,6 @@ export function AnalysisPage() {
   const analysis = useAnalysis(settled);
   const result = analysis.data?.result;
   const stale = analysis.isFetching || settled !== request;
-  const ability = useAppAbility();
-  const navigate = useNavigate();
-  const [saving, setSaving] = useState(false);
 
   return (
     <Stack spacing={2}>
@@ -39,16 +41,7 @@ export function AnalysisPage() {
       >
         <Typography variant="h1">Analysis</Typography>
         <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
-          {ability.can('create', 'Calculation') && (
-            <Button
-              variant="outlined"
-              startIcon={<SaveIcon />}
-              disabled={request === null}
-              onClick={() => setSaving(true)}
-            >
-              Save as a calc
-            </Button>
-          )}
+          {saveAction?.(request, units)}
           <UnitsToggle units={units} onChange={setUnits} />
         </Stack>
       </Stack>
@@ -95,15 +88,6 @@ export function AnalysisPage() {
 
       {result && analysis.data && (
         <AnalysisResults result={result} storeys={analysis.data.inputs.storeys} units={units} />
-      )}
-      {saving && request && (
-        <NewCalculationDialog
-          inputs={request}
-          displayUnits={units}
-          intro="The calc starts as a draft with the storeys, spectrum and settings on this page, in the project you choose."
-          onClose={() => setSaving(false)}
-          onCreated={(calc) => void navigate(`/calculations/${calc.id}`)}
-        />
       )}
     </Stack>
   );

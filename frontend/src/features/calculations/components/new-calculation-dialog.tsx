@@ -9,21 +9,26 @@ import {
   MenuItem,
   TextField,
 } from '@mui/material';
-import type { CalculationDto, CalculationInputs, DisplayUnits } from '@tiermode/shared-types';
+import type {
+  CalculationDto,
+  CalculationInputs,
+  DisplayUnits,
+  ProjectDto,
+} from '@tiermode/shared-types';
 import { useFormik } from 'formik';
 import type { ReactNode } from 'react';
 import * as yup from 'yup';
-import { useProjects } from '@/features/projects/api/projects';
 import { canOn, useAppAbility } from '@/lib/ability';
 import { errorMessages } from '@/lib/api-client';
 import { useCreateCalculation } from '../api/calculations';
 
 /**
  * Names a new draft calc in a project; it starts from `inputs`, which the designer then edits.
- * Without a `projectId` the designer picks one of the projects they may add calcs to.
+ * Without a `projectId` the designer picks one of `projects` that they may add calcs to.
  */
 export function NewCalculationDialog({
   projectId,
+  projects = [],
   inputs,
   displayUnits,
   intro = 'The draft starts from an example five-storey building; replace its storeys and spectrum with the project’s own.',
@@ -31,6 +36,8 @@ export function NewCalculationDialog({
   onCreated,
 }: {
   projectId?: string;
+  /** The projects to choose from when no `projectId` is given. */
+  projects?: ProjectDto[];
   inputs: CalculationInputs;
   displayUnits?: DisplayUnits;
   intro?: ReactNode;
@@ -38,8 +45,7 @@ export function NewCalculationDialog({
   onCreated: (calc: CalculationDto) => void;
 }) {
   const ability = useAppAbility();
-  const projects = useProjects();
-  const choices = (projects.data ?? []).filter((p) =>
+  const choices = projects.filter((p) =>
     canOn(ability, 'create', 'Calculation', { projectMemberIds: p.memberIds }),
   );
   const form = useFormik({
@@ -78,7 +84,7 @@ export function NewCalculationDialog({
               error={form.touched.projectId && Boolean(form.errors.projectId)}
               helperText={
                 (form.touched.projectId && form.errors.projectId) ||
-                (projects.isSuccess && choices.length === 0
+                (choices.length === 0
                   ? 'You are not a member of any project yet: create one under Projects first.'
                   : 'Projects you are a member of')
               }
