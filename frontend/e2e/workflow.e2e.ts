@@ -183,6 +183,13 @@ describe('The review workflow, across the four roles', () => {
       await openTab(page, 'Review');
       await page.getByText('Save your changes first.').waitFor();
       await analyse(page);
+      // The history names what the edit changed.
+      await openTab(page, 'History');
+      await page
+        .getByRole('grid')
+        .getByText('Inputs or title changed: storey 2 mass')
+        .first()
+        .waitFor();
       await openTab(page, 'Review');
       await page.getByRole('button', { name: 'Submit for review' }).click();
       await page.getByText('Submitted for review: waiting for a reviewer.').waitFor();

@@ -37,8 +37,15 @@ describe("The designer's workspace", () => {
     await page.getByRole('button', { name: 'Create the draft' }).click();
     await page.getByRole('heading', { name: CALC }).waitFor();
 
-    // The storey table keeps storey order: a header click does not sort it.
+    // The storey table keeps storey order: a header click does not sort it. Its row icons say
+    // what they do on hover.
     const grid = page.getByRole('grid', { name: 'Storey table' });
+    expect(
+      await grid
+        .getByRole('menuitem', { name: 'Delete storey 2' })
+        .or(grid.getByRole('button', { name: 'Delete storey 2' }))
+        .getAttribute('title'),
+    ).toBe('Delete storey 2');
     await grid.getByRole('columnheader', { name: /Height/ }).click();
     await grid.getByRole('columnheader', { name: /Stiffness/ }).click();
     const numbers = await grid.locator('[data-field="number"]').allTextContents();
@@ -100,6 +107,14 @@ describe("The designer's workspace", () => {
       .toBe('Unsaved changes; fix the marked inputs to save them');
     await screenshot(page, 'workspace-spectrum-unsorted');
 
+    // Reloading or closing the tab asks too: the page cancels the browser's beforeunload.
+    const asksBeforeUnload = () =>
+      page.evaluate(() => {
+        const event = new Event('beforeunload', { cancelable: true });
+        window.dispatchEvent(event);
+        return event.defaultPrevented;
+      });
+    expect(await asksBeforeUnload()).toBe(true);
     // Leaving asks first; staying keeps the edits.
     await nav(page, 'Projects');
     const leave = page.getByRole('dialog', { name: 'Leave without saving?' });
@@ -112,6 +127,7 @@ describe("The designer's workspace", () => {
     // Generating again puts the saved table back; switching units is not an edit.
     await generator.getByRole('button', { name: 'Generate the table' }).click();
     await expect.poll(() => status(page)).toBe('All changes saved');
+    expect(await asksBeforeUnload()).toBe(false);
     await page.getByRole('button', { name: 'US (kip, ft, in)' }).click();
     await expect.poll(() => status(page)).toBe('All changes saved');
 

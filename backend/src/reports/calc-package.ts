@@ -245,13 +245,23 @@ function results(doc: Doc, calc: CalculationDto, units: UnitSystem) {
       yLabel: withUnit(units, 'Elevation', 'length'),
       width: 495,
       height: 250,
-      series: (['srss', 'cqc', 'abs'] as const).map((method, i) => ({
+      // CQC first, wide and pale, then SRSS narrow and dashed over it: where the two agree both
+      // stay visible. ABS long-dashed.
+      series: (
+        [
+          ['cqc', undefined, 3.2, '#aaaaaa'],
+          ['srss', 2, 1.1, '#000000'],
+          ['abs', 5, 1.1, '#555555'],
+        ] as const
+      ).map(([method, dash, width, grey]) => ({
         label: method === 'abs' ? 'ABS (upper bound)' : method.toUpperCase(),
         points: pick(analysis.combined[method]).map(
           (v, k) => [shown(v), elevations[k]] as [number, number],
         ),
         steps: true,
-        dash: i === 0 ? undefined : i * 2,
+        dash,
+        width,
+        grey,
       })),
     });
   if (doc.y > 420) doc.addPage();

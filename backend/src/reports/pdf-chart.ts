@@ -6,6 +6,10 @@ export interface Series {
   /** Drawn as steps (a storey quantity, constant over the storey height). */
   steps?: boolean;
   dash?: number;
+  /** Line width in points (default 1.1). */
+  width?: number;
+  /** Its grey (default: by its place in the list). */
+  grey?: string;
   markers?: boolean;
   /** Markers only, no line between them (e.g. the modal periods on a spectrum). */
   pointsOnly?: boolean;
@@ -94,7 +98,7 @@ export function lineChart(
           ] as [number, number][];
         })
       : series.points;
-    doc.lineWidth(1.1).strokeColor(greys[i % greys.length]);
+    doc.lineWidth(series.width ?? 1.1).strokeColor(series.grey ?? greys[i % greys.length]);
     if (series.dash) doc.dash(series.dash, { space: series.dash });
     points.forEach(([x, y], k) => (k === 0 ? doc.moveTo(px(x), py(y)) : doc.lineTo(px(x), py(y))));
     doc.stroke().undash();
@@ -111,7 +115,7 @@ export function lineChart(
   let lx = left;
   const ly = top + height + 26;
   options.series.forEach((series, i) => {
-    doc.lineWidth(1.1).strokeColor(greys[i % greys.length]);
+    doc.lineWidth(series.width ?? 1.1).strokeColor(series.grey ?? greys[i % greys.length]);
     if (series.dash) doc.dash(series.dash, { space: series.dash });
     doc
       .moveTo(lx, ly + 3)

@@ -10,12 +10,20 @@ interface Props {
   units: UnitSystem;
 }
 
-// CQC and SRSS often agree to the pixel: CQC is drawn first, wide and solid, and SRSS on top of
-// it, narrow and dashed, so each stays visible where they coincide; ABS is long-dashed.
+// CQC and SRSS often agree to the pixel: CQC is drawn underneath, wide and solid, and SRSS over
+// it, narrow and dashed, so each stays visible where they coincide; ABS is long-dashed. (In
+// chart.js a dataset with a higher `order` is drawn earlier, under the others.)
 const METHODS = [
-  { key: 'cqc', label: 'CQC', dash: [] as number[], width: 5, colour: 1 },
-  { key: 'srss', label: 'SRSS', dash: [5, 5] as number[], width: 2, colour: 0 },
-  { key: 'abs', label: 'ABS (upper bound)', dash: [12, 4] as number[], width: 2, colour: 2 },
+  { key: 'cqc', label: 'CQC', dash: [] as number[], width: 5, colour: 1, order: 2 },
+  { key: 'srss', label: 'SRSS', dash: [5, 5] as number[], width: 2, colour: 0, order: 1 },
+  {
+    key: 'abs',
+    label: 'ABS (upper bound)',
+    dash: [12, 4] as number[],
+    width: 2,
+    colour: 2,
+    order: 0,
+  },
 ] as const;
 
 type Profile = {
@@ -81,7 +89,14 @@ export function ResponseProfiles({ result, elevations, units }: Props) {
                       title: { display: true, text: `Elevation (${unitLabel(units, 'length')})` },
                     },
                   },
-                  plugins: { legend: { position: 'bottom' }, title: { display: false } },
+                  plugins: {
+                    // The legend in the list's order (CQC, SRSS, ABS), not the drawing order.
+                    legend: {
+                      position: 'bottom',
+                      labels: { sort: (a, b) => (a.datasetIndex ?? 0) - (b.datasetIndex ?? 0) },
+                    },
+                    title: { display: false },
+                  },
                 }}
                 data={{
                   datasets: METHODS.map((m) => ({
@@ -93,6 +108,7 @@ export function ResponseProfiles({ result, elevations, units }: Props) {
                     borderDash: [...m.dash],
                     pointRadius: 0,
                     borderWidth: m.width,
+                    order: m.order,
                   })),
                 }}
               />
