@@ -50,6 +50,14 @@ describe("The designer's workspace", () => {
     await grid.getByRole('columnheader', { name: /Stiffness/ }).click();
     const numbers = await grid.locator('[data-field="number"]').allTextContents();
     expect(numbers.filter((n) => /^\d+$/.test(n))).toEqual(['1', '2', '3', '4', '5']);
+    // Values show six significant figures at most (723,012 kN/m, not 723,012.267).
+    const stiffnesses = await grid
+      .locator('[data-field="stiffness"][role="gridcell"]')
+      .allTextContents();
+    expect(stiffnesses).toHaveLength(5);
+    for (const text of stiffnesses) {
+      expect(text.replace(/[^0-9]/g, '').replace(/^0+/, '').length).toBeLessThanOrEqual(6);
+    }
 
     // A generated spectrum remembers its generator and parameters.
     await page.getByRole('tab', { name: 'Design spectrum' }).click();
@@ -67,6 +75,8 @@ describe("The designer's workspace", () => {
     await analyse(page);
     expect(tabParam(page)).toBe('results');
 
+    // One date format: "2026-12-03 14:05 UTC".
+    await page.getByText(/^Engine \d+\.\d+\.\d+, \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC\.$/).waitFor();
     // Every response as numbers: combined and any single mode, with units.
     const responses = page.getByRole('table', { name: 'Storey responses' });
     await responses.getByRole('columnheader', { name: 'Storey shear (kN)' }).waitFor();

@@ -3,28 +3,13 @@ import type { AnalysisResponse } from '@tiermode/shared-types';
 import { Scatter } from 'react-chartjs-2';
 import { SERIES_COLOURS, STATIC_CHART } from '@/lib/charts';
 import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '@/lib/units';
+import { COMBINATION_STYLES } from '../../model/combination-styles';
 
 interface Props {
   result: AnalysisResponse;
   elevations: number[];
   units: UnitSystem;
 }
-
-// CQC and SRSS often agree to the pixel: CQC is drawn underneath, wide and solid, and SRSS over
-// it, narrow and dashed, so each stays visible where they coincide; ABS is long-dashed. (In
-// chart.js a dataset with a higher `order` is drawn earlier, under the others.)
-const METHODS = [
-  { key: 'cqc', label: 'CQC', dash: [] as number[], width: 5, colour: 1, order: 2 },
-  { key: 'srss', label: 'SRSS', dash: [5, 5] as number[], width: 2, colour: 0, order: 1 },
-  {
-    key: 'abs',
-    label: 'ABS (upper bound)',
-    dash: [12, 4] as number[],
-    width: 2,
-    colour: 2,
-    order: 0,
-  },
-] as const;
 
 type Profile = {
   title: string;
@@ -99,7 +84,7 @@ export function ResponseProfiles({ result, elevations, units }: Props) {
                   },
                 }}
                 data={{
-                  datasets: METHODS.map((m) => ({
+                  datasets: COMBINATION_STYLES.map((m) => ({
                     label: m.label,
                     data: points(result.combined[m.key][profile.field], profile),
                     showLine: true,
