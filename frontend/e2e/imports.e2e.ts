@@ -5,6 +5,7 @@ import ExcelJS from 'exceljs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, SCREENSHOTS, signIn } from './support/browser';
+import { download } from './support/calc-page';
 
 /** An invented four-storey table as a designer keeps it, with one mistyped mass (row 3). */
 async function workbook(): Promise<Buffer> {
@@ -18,18 +19,6 @@ async function workbook(): Promise<Buffer> {
     ['Roof', 3.6, 360, 430000],
   ].forEach((row) => sheet.addRow(row));
   return Buffer.from(await book.xlsx.writeBuffer());
-}
-
-/** Chooses an item of the calc page's Download menu and returns the file the browser saves. */
-async function download(page: Page, item: string) {
-  await page.getByRole('button', { name: 'Download' }).click();
-  const [saved] = await Promise.all([
-    page.waitForEvent('download'),
-    page.getByRole('menuitem', { name: item }).click(),
-  ]);
-  const chunks: Buffer[] = [];
-  for await (const chunk of await saved.createReadStream()) chunks.push(chunk as Buffer);
-  return { name: saved.suggestedFilename(), bytes: Buffer.concat(chunks) };
 }
 
 /** Writes a calc package beside the screenshots and renders its first page with pdftoppm. */

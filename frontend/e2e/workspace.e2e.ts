@@ -1,7 +1,11 @@
+import { execFileSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, SCREENSHOTS, signIn } from './support/browser';
-import { analyse, editStorey, nav } from './support/calc-page';
+import { analyse, download, editStorey, nav } from './support/calc-page';
 
 // An invented calc in the demo's invented laboratory project; every number is made up.
 const PROJECT = 'Quarry Lane laboratory';
@@ -153,15 +157,30 @@ describe("The designer's workspace", () => {
     await page.getByText('The checks are older than the inputs or the basis').waitFor();
     await analyse(page);
     expect(tabParam(page)).toBe('checks');
-    const design = page.getByRole('table', { name: 'Design storey values' });
-    await design.waitFor();
-    await design.getByRole('columnheader', { name: 'Storey shear (kip)' }).waitFor();
-    expect(await design.getByRole('columnheader', { name: 'elastic', exact: true }).count()).toBe(
-      5,
-    );
-    expect(await design.getByRole('columnheader', { name: 'design', exact: true }).count()).toBe(5);
+    const designTable = page.getByRole('table', { name: 'Design storey values' });
+    await designTable.waitFor();
+    await designTable.getByRole('columnheader', { name: 'Storey shear (kip)' }).waitFor();
+    expect(
+      await designTable.getByRole('columnheader', { name: 'elastic', exact: true }).count(),
+    ).toBe(5);
+    expect(
+      await designTable.getByRole('columnheader', { name: 'design', exact: true }).count(),
+    ).toBe(5);
     expect(await page.getByRole('alert', { name: 'Checks warnings' }).count()).toBe(0);
     await screenshot(page, 'workspace-checks-design-values');
+
+    // The files come in the units on screen: kip, in, kip·ft.
+    const design = (await download(page, 'Design storey values (CSV)')).bytes.toString('utf8');
+    expect(design.split('\r\n')[0]).toContain('Storey shear, design (kip)');
+    const combined = (await download(page, 'Combined responses (CSV)')).bytes.toString('utf8');
+    expect(combined.split('\r\n')[0]).toContain('Overturning moment (kip·ft)');
+    const pdf = (await download(page, 'Calc package (PDF)')).bytes;
+    const file = join(tmpdir(), `workspace-${Date.now()}.pdf`);
+    writeFileSync(file, pdf);
+    const text = execFileSync('pdftotext', [file, '-']).toString('utf8');
+    expect(text).toContain('Storey shear (kip)');
+    expect(text).toContain('Storey values for design');
+    expect(text).not.toContain('(kN)');
 
     // An edit, then signing out: asked first; leaving signs out.
     await page.getByRole('tab', { name: 'Storey table' }).click();

@@ -31,3 +31,15 @@ export async function analyse(page: Page) {
   await expect.poll(() => page.getByRole('progressbar', { name: 'Working' }).count()).toBe(0);
   await expect.poll(() => page.getByRole('status').first().textContent()).toBe('All changes saved');
 }
+
+/** Chooses an item of the calc page's Download menu and returns the file the browser saves. */
+export async function download(page: Page, item: string) {
+  await page.getByRole('button', { name: 'Download' }).click();
+  const [saved] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('menuitem', { name: item }).click(),
+  ]);
+  const chunks: Buffer[] = [];
+  for await (const chunk of await saved.createReadStream()) chunks.push(chunk as Buffer);
+  return { name: saved.suggestedFilename(), bytes: Buffer.concat(chunks) };
+}
