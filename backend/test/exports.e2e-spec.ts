@@ -5,6 +5,19 @@ import { ASCE_BASIS, binaryBody, sampleInputs, useSignedInApp } from './support/
 
 const { http, as } = useSignedInApp();
 
+/** The results workbook of a calc, as the designer downloads it. */
+async function workbookOf(id: string): Promise<ExcelJS.Workbook> {
+  const xlsx = await http()
+    .get(`/api/calculations/${id}/results.xlsx`)
+    .set(as('designer'))
+    .buffer(true)
+    .parse(binaryBody)
+    .expect(200);
+  const book = new ExcelJS.Workbook();
+  await book.xlsx.load(xlsx.body as ExcelJS.Buffer);
+  return book;
+}
+
 describe('Exports', () => {
   let projectId: string;
   let calc: CalculationDto;
@@ -105,14 +118,7 @@ describe('Exports', () => {
       Number((calc.analysis!.combined.cqc.baseShear / 1000).toPrecision(6)),
     );
 
-    const xlsx = await http()
-      .get(`/api/calculations/${calc.id}/results.xlsx`)
-      .set(as('designer'))
-      .buffer(true)
-      .parse(binaryBody)
-      .expect(200);
-    const book = new ExcelJS.Workbook();
-    await book.xlsx.load(xlsx.body as ExcelJS.Buffer);
+    const book = await workbookOf(calc.id);
     expect(book.worksheets.map((s) => s.name)).toEqual([
       'Modes',
       'Modal responses',
@@ -177,14 +183,7 @@ describe('Exports', () => {
     expect(Number(rows[1][at - 1])).toBe(
       Number((checked.analysis!.combined.cqc.storeyShear[0] / 1000).toPrecision(6)),
     );
-    const xlsx = await http()
-      .get(`/api/calculations/${calc.id}/results.xlsx`)
-      .set(as('designer'))
-      .buffer(true)
-      .parse(binaryBody)
-      .expect(200);
-    const book = new ExcelJS.Workbook();
-    await book.xlsx.load(xlsx.body as ExcelJS.Buffer);
+    const book = await workbookOf(calc.id);
     expect(book.worksheets.map((w) => w.name)).toContain('Design storey values');
     // The calc is kept in US units: the workbook is in them.
     expect(book.getWorksheet('Design storey values')!.getRow(1).values).toContain(

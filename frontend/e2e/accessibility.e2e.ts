@@ -1,7 +1,8 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, it } from 'vitest';
 import { expectAccessible } from './support/axe';
-import { launchBrowser, newPage, signIn, type DemoRole } from './support/browser';
+import { asRole, launchBrowser, type DemoRole } from './support/browser';
+import { nav } from './support/calc-page';
 
 /**
  * axe-core on every main page, signed in as the role that uses it, with no serious or critical
@@ -11,19 +12,8 @@ const DRAFT = 'Loading-dock storey study, north-south';
 const SUBMITTED = 'Lateral modal analysis, east-west';
 const LOCKED = 'Lateral modal analysis, north-south';
 
-async function as(browser: Browser, role: DemoRole | null, job: (page: Page) => Promise<void>) {
-  const { page, close } = await newPage(browser, { bypassCSP: true });
-  if (role) {
-    await signIn(page, role);
-    await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
-  }
-  await job(page);
-  await close();
-}
-
-const nav = async (page: Page, name: string) => {
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name }).click();
-};
+const as = (browser: Browser, role: DemoRole | null, job: (page: Page) => Promise<void>) =>
+  asRole(browser, role, job, { bypassCSP: true });
 
 async function eachTab(page: Page, label: string, tabs: string[]) {
   for (const tab of tabs) {

@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
+import { typeIntoCell } from './support/calc-page';
 
 // An invented five-storey building, storey 1 first: label, height (m), mass (t), stiffness (kN/m).
 const PASTED = [
@@ -30,13 +31,8 @@ async function waitForResults(page: Page) {
 const storeyRow = (page: Page, text: string) =>
   page.getByRole('grid', { name: 'Storey table' }).getByRole('row').filter({ hasText: text });
 
-async function editCell(page: Page, rowText: string, field: string, value: string) {
-  const cell = storeyRow(page, rowText).locator(`[data-field="${field}"]`);
-  await cell.dblclick();
-  const input = cell.locator('input');
-  await input.fill(value);
-  await input.press('Enter');
-}
+const editCell = (page: Page, rowText: string, field: string, value: string) =>
+  typeIntoCell(storeyRow(page, rowText).locator(`[data-field="${field}"]`), value);
 
 describe('The analysis page (designer)', () => {
   let browser: Browser;
@@ -72,10 +68,7 @@ describe('The analysis page (designer)', () => {
     await page.getByRole('button', { name: 'Add a storey on top' }).click();
     const sixth = page.getByRole('grid', { name: 'Storey table' }).locator('[data-rowindex="5"]');
     await sixth.waitFor();
-    const labelCell = sixth.locator('[data-field="label"]');
-    await labelCell.dblclick();
-    await labelCell.locator('input').fill('Plant room');
-    await labelCell.locator('input').press('Enter');
+    await typeIntoCell(sixth.locator('[data-field="label"]'), 'Plant room');
     await storeyRow(page, 'Plant room').waitFor();
     await waitForResults(page);
     expect(await page.getByRole('table', { name: 'Modes' }).locator('tbody tr').count()).toBe(6);

@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, signIn } from './support/browser';
-import { analyse } from './support/calc-page';
+import { analyse, editStorey } from './support/calc-page';
 
 const CALC = 'Loading-dock storey study, north-south';
 
@@ -73,14 +73,7 @@ describe('Code-basis checks (designer)', () => {
 
     // Stiffen storey 1 (braced bays at the loading dock): 1,400,000 kN/m.
     await page.getByRole('tab', { name: 'Storey table' }).click();
-    const cell = page
-      .getByRole('grid', { name: 'Storey table' })
-      .getByRole('row')
-      .filter({ has: page.getByRole('gridcell', { name: '1', exact: true }) })
-      .locator('[data-field="stiffness"]');
-    await cell.dblclick();
-    await cell.locator('input').fill('1400000');
-    await cell.locator('input').press('Enter');
+    await editStorey(page, 1, 'stiffness', '1400000');
     await analyseAndOpenChecks(page);
     await page
       .getByRole('alert', { name: 'Drift check' })

@@ -5,7 +5,7 @@ import ExcelJS from 'exceljs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, SCREENSHOTS, signIn } from './support/browser';
-import { download } from './support/calc-page';
+import { download, typeIntoCell } from './support/calc-page';
 
 /** An invented four-storey table as a designer keeps it, with one mistyped mass (row 3). */
 async function workbook(): Promise<Buffer> {
@@ -63,10 +63,10 @@ async function fixLevel2(page: Page) {
     .getByRole('alert', { name: 'Storey table problems' })
     .getByText('Storey 2: mass must be a positive number')
     .waitFor();
-  const cell = grid.getByRole('row').filter({ hasText: 'Level 2' }).locator('[data-field="mass"]');
-  await cell.dblclick();
-  await cell.locator('input').fill('480');
-  await cell.locator('input').press('Enter');
+  await typeIntoCell(
+    grid.getByRole('row').filter({ hasText: 'Level 2' }).locator('[data-field="mass"]'),
+    '480',
+  );
   await page.getByRole('alert', { name: 'Storey table problems' }).waitFor({ state: 'detached' });
 }
 

@@ -1,7 +1,7 @@
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectAccessible } from './support/axe';
-import { launchBrowser, newPage, screenshot, signIn, type DemoRole } from './support/browser';
+import { asRole, launchBrowser, screenshot, type DemoRole } from './support/browser';
 
 /** A phone, a tablet upright, and a wide desktop. */
 const SCREENS = [
@@ -64,18 +64,8 @@ async function go(page: Page, screen: Screen, name: string) {
   }
 }
 
-async function as(
-  browser: Browser,
-  role: DemoRole,
-  screen: Screen,
-  job: (page: Page) => Promise<void>,
-) {
-  const { page, close } = await newPage(browser, { bypassCSP: true, viewport: screen });
-  await signIn(page, role);
-  await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
-  await job(page);
-  await close();
-}
+const as = (browser: Browser, role: DemoRole, screen: Screen, job: (page: Page) => Promise<void>) =>
+  asRole(browser, role, job, { bypassCSP: true, viewport: screen });
 
 async function check(page: Page, screen: Screen, what: string) {
   await page.waitForTimeout(150); // charts and grids settle

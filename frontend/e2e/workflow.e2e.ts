@@ -1,13 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import {
-  launchBrowser,
-  newPage,
-  screenshot,
-  SCREENSHOTS,
-  signIn,
-  type DemoRole,
-} from './support/browser';
+import { asRole, launchBrowser, screenshot, SCREENSHOTS, type DemoRole } from './support/browser';
 import { analyse, editStorey, nav } from './support/calc-page';
 
 // An invented project for this journey; every name and number is made up.
@@ -15,14 +8,8 @@ const PROJECT = 'Birch Row offices';
 const CALC = 'Birch Row lateral analysis';
 const SCRATCH = 'Scratch draft';
 
-async function as<T>(browser: Browser, role: DemoRole, job: (page: Page) => Promise<T>) {
-  const { page, close } = await newPage(browser);
-  await signIn(page, role);
-  await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
-  const result = await job(page);
-  await close();
-  return result;
-}
+const as = <T>(browser: Browser, role: DemoRole, job: (page: Page) => Promise<T>) =>
+  asRole(browser, role, job);
 
 async function openTab(page: Page, name: string) {
   await page.getByRole('tab', { name }).click();

@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, newPage, screenshot, SCREENSHOTS, signIn } from './support/browser';
-import { analyse, download, editStorey, nav } from './support/calc-page';
+import { analyse, download, editStorey, nav, typeIntoCell } from './support/calc-page';
 
 // An invented calc in the demo's invented laboratory project; every number is made up.
 const PROJECT = 'Quarry Lane laboratory';
@@ -14,14 +14,13 @@ const CALC = 'Plant deck lateral study';
 const tabParam = (page: Page) => new URL(page.url()).searchParams.get('tab');
 const status = (page: Page) => page.getByRole('status').first().textContent();
 
-async function editSpectrumPeriod(page: Page, point: number, value: string) {
-  const cell = page
-    .getByRole('grid', { name: 'Spectrum points' })
-    .locator(`[data-rowindex="${point - 1}"] [data-field="period"]`);
-  await cell.dblclick();
-  await cell.locator('input').fill(value);
-  await cell.locator('input').press('Enter');
-}
+const editSpectrumPeriod = (page: Page, point: number, value: string) =>
+  typeIntoCell(
+    page
+      .getByRole('grid', { name: 'Spectrum points' })
+      .locator(`[data-rowindex="${point - 1}"] [data-field="period"]`),
+    value,
+  );
 
 describe("The designer's workspace", () => {
   let browser: Browser;

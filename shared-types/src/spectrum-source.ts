@@ -56,9 +56,16 @@ const BASIS_OF: Record<SpectrumGeneratorKind, CodeBasisParameters['code']> = {
 
 type BasisValue = number | string;
 
-/** A value as a person reads it: at most 10 significant digits, so 1.2 x 0.25 reads 0.3. */
+/**
+ * A parameter value as a person reads and types it: at most 10 significant digits, so
+ * 1.2 x 0.25 reads 0.3, not 0.30000000000000004.
+ */
+export function readableValue(value: number | string): string {
+  return typeof value === 'number' ? String(Number(value.toPrecision(10))) : value;
+}
+
 const show = (value: unknown) =>
-  typeof value === 'number' ? String(Number(value.toPrecision(10))) : String(value);
+  typeof value === 'number' || typeof value === 'string' ? readableValue(value) : String(value);
 
 /** One basis field the spectrum fixes: its name in the basis, label, unit and value. */
 export interface SpectrumBasisValue {

@@ -58,6 +58,26 @@ export async function newPage(
   return { context, page, close };
 }
 
+/**
+ * A fresh page signed in as `role` (or not signed in, for null), on the dashboard, for `job`;
+ * closed after it, failing on any page error meanwhile (see newPage).
+ */
+export async function asRole<T>(
+  browser: Browser,
+  role: DemoRole | null,
+  job: (page: Page) => Promise<T>,
+  options: Parameters<typeof newPage>[1] = {},
+): Promise<T> {
+  const { page, close } = await newPage(browser, options);
+  if (role) {
+    await signIn(page, role);
+    await page.getByRole('heading', { name: /^Welcome/ }).waitFor();
+  }
+  const result = await job(page);
+  await close();
+  return result;
+}
+
 export async function signIn(page: Page, role: DemoRole, password = DEMO_PASSWORD): Promise<void> {
   await page.goto('/sign-in');
   await page.getByLabel('Email').fill(`${role}@tiermode.test`);

@@ -1,9 +1,16 @@
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { expect } from 'vitest';
 
 /** Follows a link of the main navigation. */
 export const nav = (page: Page, name: string) =>
   page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name }).click();
+
+/** Types a value into a grid cell as a person does: double-click, type, Enter. */
+export async function typeIntoCell(cell: Locator, value: string) {
+  await cell.dblclick();
+  await cell.locator('input').fill(value);
+  await cell.locator('input').press('Enter');
+}
 
 /** Types a value into one cell of the storey table (storey 1 = the base). */
 export async function editStorey(page: Page, storey: number, field: string, value: string) {
@@ -11,10 +18,7 @@ export async function editStorey(page: Page, storey: number, field: string, valu
     .getByRole('grid', { name: 'Storey table' })
     .getByRole('row')
     .filter({ has: page.getByRole('gridcell', { name: String(storey), exact: true }) });
-  const cell = row.locator(`[data-field="${field}"]`);
-  await cell.dblclick();
-  await cell.locator('input').fill(value);
-  await cell.locator('input').press('Enter');
+  await typeIntoCell(row.locator(`[data-field="${field}"]`), value);
 }
 
 /**

@@ -36,6 +36,18 @@ function shown(field: Field, value: unknown, units: UnitSystem): string {
   return formatNumber(toDisplay(units, QUANTITY[field], Number(value)), 6);
 }
 
+/**
+ * "old → new" in the chosen units; where six significant figures would show the same number on
+ * both sides, every digit, so a change is never shown as "280 → 280".
+ */
+function changedPair(field: Field, old: unknown, now: unknown, units: UnitSystem): string {
+  const [a, b] = [shown(field, old, units), shown(field, now, units)];
+  if (a !== b || field === 'label') return `${a} → ${b}`;
+  const full = (v: unknown) =>
+    String(Number(toDisplay(units, QUANTITY[field], Number(v)).toPrecision(15)));
+  return `${full(old)} → ${full(now)}`;
+}
+
 /** Any other changed value, in words: numbers plainly, objects as JSON. */
 const plain = (value: unknown): string =>
   value === null || value === undefined
@@ -190,7 +202,7 @@ function ChangesView({
                             fontWeight: 500,
                           }}
                         >
-                          {shown(f.field, moved.old, units)} → {shown(f.field, moved.new, units)}
+                          {changedPair(f.field, moved.old, moved.new, units)}
                         </TableCell>
                       );
                     }

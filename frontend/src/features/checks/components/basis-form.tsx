@@ -3,6 +3,7 @@ import {
   basisValuesFromSpectrum,
   CODE_BASIS_LABELS,
   CODE_BASES,
+  readableValue,
   spectrumBasisMismatches,
   type CodeBasisParameters,
   type SpectrumSource,
@@ -23,10 +24,6 @@ import {
   toBasis,
   type BasisFormValues,
 } from './basis-schema';
-
-/** A basis value as typed: ten significant digits at most (1.2 x 0.25 reads 0.3). */
-const shown = (value: number | string) =>
-  typeof value === 'number' ? String(Number(value.toPrecision(10))) : value;
 
 /**
  * The code basis and its parameters, each with the clause it comes from. Where the design
@@ -62,7 +59,7 @@ export function BasisForm({
   const fixed = new Set(fromSpectrum.map((v) => v.field));
   const initialValues = useMemo(() => {
     const values = fromBasis(basis, code, units);
-    for (const v of fromSpectrum) values[v.field] = shown(v.value);
+    for (const v of fromSpectrum) values[v.field] = readableValue(v.value);
     return values;
   }, [basis, code, units, fromSpectrum]);
   const mismatches = basis ? spectrumBasisMismatches(basis, spectrumSource) : [];
@@ -179,7 +176,7 @@ export function BasisForm({
         <Typography variant="body2" data-testid="basis-from-spectrum">
           From the design spectrum:{' '}
           {fromSpectrum
-            .map((v) => `${v.label} ${shown(v.value)}${v.unit ? ` ${v.unit}` : ''}`)
+            .map((v) => `${v.label} ${readableValue(v.value)}${v.unit ? ` ${v.unit}` : ''}`)
             .join(', ')}
           . Generate the spectrum again to change them.
         </Typography>

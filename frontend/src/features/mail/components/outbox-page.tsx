@@ -38,7 +38,7 @@ const columns: GridColDef<MailMessageDto>[] = [
   { field: 'lastError', headerName: 'Last error', flex: 1, minWidth: 160 },
 ];
 
-/** Every message the product sent, as the local mail catcher received it, and any that failed. */
+/** Every message the product sent, once each: sent, waiting, or failed with its error. */
 export function OutboxPage() {
   const outbox = useOutbox();
   const [openId, setOpenId] = useState<string | null>(null);
@@ -48,9 +48,8 @@ export function OutboxPage() {
     <Stack spacing={2}>
       <Typography variant="h1">Outbox</Typography>
       <Typography color="text.secondary">
-        Mail goes out over SMTP. Each message appears as sent (or waiting, or failed, with its
-        error) and, without a mail server configured, a second time as the local catcher received
-        it. Select a message to read it.
+        Mail goes out over SMTP (to the local catcher when no mail server is configured). Each
+        message appears once: sent, waiting, or failed with its error. Select a message to read it.
       </Typography>
       {outbox.isError && <Alert severity="error">{errorMessages(outbox.error).join(' ')}</Alert>}
       <Box sx={{ height: Math.min(520, 160 + rows.length * 52) }}>
