@@ -8,6 +8,7 @@ import type { MathJsInstance } from 'mathjs' with { 'resolution-mode': 'import' 
 import { analyse } from '../src/analysis/engine/analyse';
 import { naturalModes, modesFromEigenpairs, standardForm } from '../src/analysis/engine/modes';
 import type { Storey } from '../src/analysis/engine/shear-building';
+import { building, round, time } from './bench-support';
 
 const SIZES = [10, 50, 200, 500];
 /** The targets for the full analysis (issue 3): 200 storeys under 10 ms, 500 under 100 ms. */
@@ -20,15 +21,6 @@ const spectrum = {
     { period: 8, sa: 0.075 },
   ],
 };
-
-function building(n: number): Storey[] {
-  // Mass and stiffness tapering up the height, as in a real tower.
-  return Array.from({ length: n }, (_, i) => ({
-    mass: 4e5 * (1 - (0.4 * i) / n),
-    stiffness: 8e8 * (1 - (0.6 * i) / n),
-    height: i === 0 ? 4.5 : 3.5,
-  }));
-}
 
 type Eigs = MathJsInstance['eigs'];
 
@@ -50,29 +42,6 @@ function denseModes(eigs: Eigs, storeys: readonly Storey[]) {
     pairs.map((p) => p.vector),
   );
 }
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((x, y) => x - y);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
-}
-
-/**
- * The median of `repetitions` timed runs, after `warmUp` untimed ones: V8 compiles a function in
- * tiers as it gets hot, so the first few runs measure the compiler rather than the engine.
- */
-function time(run: () => void, repetitions: number, warmUp = 10): number {
-  for (let w = 0; w < warmUp; w += 1) run();
-  const samples: number[] = [];
-  for (let r = 0; r < repetitions; r += 1) {
-    const start = performance.now();
-    run();
-    samples.push(performance.now() - start);
-  }
-  return median(samples);
-}
-
-const round = (ms: number) => Math.round(ms * 100) / 100;
 
 async function main(): Promise<void> {
   // mathjs ships its types as an ES module; a dynamic import keeps this file CommonJS.

@@ -14,3 +14,4 @@ export * from './spectrum-table';
 export * from './dates';
 export * from './units';
 export * from './changes';
+export * from './response-history';

@@ -22,8 +22,9 @@ export type Quantity =
 createUnit('kip', '4448.2216152605 N', { override: true });
 createUnit('ksi', '1000 psi', { override: true });
 
-/** Standard gravity, m/s^2 (CGPM 1901), for weight <-> mass. */
-const G = 9.80665;
+/** Standard gravity, m/s^2 (CGPM 1901): weight <-> mass, and the unit g of accelerations. */
+export const STANDARD_GRAVITY = 9.80665;
+const G = STANDARD_GRAVITY;
 
 interface UnitSpec {
   /** mathjs unit of the displayed value */

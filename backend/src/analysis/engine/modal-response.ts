@@ -1,9 +1,9 @@
-import type { ModalResponse } from '@tiermode/shared-types';
+import { STANDARD_GRAVITY, type ModalResponse } from '@tiermode/shared-types';
 import type { Mode } from './modes';
 import type { Storey } from './shear-building';
 
-/** Standard gravity, m/s^2 (the conventional value, CGPM 1901). */
-export const STANDARD_GRAVITY = 9.80665;
+/** Standard gravity, m/s^2 (the conventional value, CGPM 1901), from the one unit table. */
+export { STANDARD_GRAVITY };
 
 /**
  * The maxima of one mode for the spectral acceleration Sa (g) at its period (method.md,

@@ -12,6 +12,7 @@ import {
 } from '@mui/material';
 import {
   shapeNormalisationNote,
+  STANDARD_GRAVITY,
   type AnalysisResponse,
   type StoreyInput,
 } from '@tiermode/shared-types';
@@ -20,7 +21,7 @@ import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '@/lib/units
 
 /** Up to this many storeys M and K are written out in full; above it, row by row in band form. */
 const FULL_MATRIX_STOREYS = 8;
-const G = 9.80665;
+const G = STANDARD_GRAVITY;
 /** 1 kip s^2/in = 4448.2216152605 N / 0.0254 m/s^2, in kg: the US mass unit that pairs with kip/in. */
 const KIP_S2_PER_IN = 4448.2216152605 / 0.0254;
 
