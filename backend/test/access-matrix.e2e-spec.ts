@@ -418,6 +418,68 @@ const MATRIX: Cell[] = [
         .send({ kind: 'asce7-two-period', sds: 1, sd1: 0.6, tl: 8 }),
   },
   {
+    route: 'POST /api/free-vibration',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/free-vibration')
+        .set(as(c))
+        .send({
+          storeys: analysisBody.storeys,
+          dampingRatio: 0.05,
+          initialDisplacements: analysisBody.storeys.map(() => 0.01),
+          duration: 1,
+          timeStep: 0.01,
+        }),
+  },
+  {
+    route: 'POST /api/response-history',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/response-history')
+        .set(as(c))
+        .send({
+          storeys: analysisBody.storeys,
+          dampingRatio: 0.05,
+          record: { timeStep: 0.01, units: 'g', accelerations: [0, 0.1, -0.1, 0] },
+        }),
+  },
+  {
+    route: 'POST /api/record-spectrum',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/record-spectrum')
+        .set(as(c))
+        .send({
+          record: { timeStep: 0.01, units: 'g', accelerations: [0, 0.1, -0.1, 0] },
+          dampingRatio: 0.05,
+          periods: [0.5, 1],
+        }),
+  },
+  {
+    route: 'GET /api/records/demo',
+    allowed: everyone,
+    ok: 200,
+    call: (c) => http().get('/api/records/demo').set(as(c)),
+  },
+  {
+    route: 'POST /api/imports/record',
+    allowed: everyone,
+    ok: 200,
+    call: (c) =>
+      http()
+        .post('/api/imports/record')
+        .set(as(c))
+        .field('units', 'g')
+        .field('timeStep', '0.01')
+        .attach('file', Buffer.from('0\n0.1\n-0.1\n0\n'), 'record.txt'),
+  },
+  {
     route: 'POST /api/imports/storeys',
     allowed: everyone,
     ok: 200,

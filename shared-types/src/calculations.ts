@@ -1,6 +1,7 @@
 import type { AnalysisRequest, AnalysisResponse } from './analysis';
 import type { ChecksResponse, CodeBasisParameters } from './checks';
 import type { CodeBasis } from './projects';
+import type { ResponseHistoryResult, ResponseHistorySetup } from './response-history';
 
 export const CALCULATION_STATUSES = ['draft', 'submitted', 'locked', 'superseded'] as const;
 export type CalculationStatus = (typeof CALCULATION_STATUSES)[number];
@@ -31,6 +32,10 @@ export interface CalculationDto {
   checks: ChecksResponse | null;
   /** The stored analysis of the inputs, or null until analysed. */
   analysis: AnalysisResponse | null;
+  /** The ground-motion record and how it is scaled, and the free vibration's start; or null. */
+  history: ResponseHistorySetup | null;
+  /** The response history made with the stored analysis (sealed with it), or null. */
+  historyResults: ResponseHistoryResult | null;
   engineVersion: string | null;
   /** ISO times. */
   inputsChangedAt: string;
@@ -73,6 +78,8 @@ export interface UpdateCalculationRequest {
   displayUnits?: DisplayUnits;
   /** The code basis; null removes it. A change makes the stored results stale. */
   basis?: CodeBasisParameters | null;
+  /** The response history's record and setup; null removes it. A change makes the results stale. */
+  history?: ResponseHistorySetup | null;
 }
 
 /** The record a lock seals: who accepted the calc, under which licence, when, and the hash. */

@@ -1,4 +1,4 @@
-import type { StoreyInput } from './analysis';
+import type { ImportReadAs, StoreyInput } from './analysis';
 import { STANDARD_GRAVITY } from './units';
 
 /**
@@ -220,14 +220,17 @@ export type RecordScaling =
   | { method: 'factor'; factor: number }
   | { method: 'spectrum'; rule: 'mean' | 'not-below-90'; periodRange: [number, number] };
 
-/** Where a calc's free vibration starts. */
+/**
+ * Where a calc's free vibration starts: a mode's shape with the roof (or its reference level)
+ * displaced by `amplitude` m, read from the current analysis each time (so it stays that mode's
+ * shape when the storeys change), or displacements the engineer gives, one per level.
+ */
+export type FreeVibrationStart =
+  { kind: 'mode'; mode: number; amplitude: number } | { kind: 'shape'; displacements: number[] };
+
+/** A calc's free vibration. */
 export interface FreeVibrationSetup {
-  /** m, one per level. */
-  initialDisplacements: number[];
-  /** m/s, one per level; zeros when absent. */
-  initialVelocities?: number[];
-  /** In words, e.g. "mode 1, roof 0.1 m" or "the engineer's shape". */
-  startedFrom: string;
+  start: FreeVibrationStart;
   /** s */
   duration: number;
   /** s */
@@ -264,7 +267,10 @@ export interface ResponseHistoryResult {
   recordSpectrum: RecordSpectrumResponse;
   /** The free vibration's peaks and each mode's start (no histories: the tab draws them live). */
   freeVibration?: {
+    /** In words: "mode 2, 0.05 m at the roof" or "the engineer's shape". */
     startedFrom: string;
+    /** m, one per level: where it started. */
+    initialDisplacements: number[];
     peaks: { displacement: number[]; time: number[] };
     modes: {
       number: number;
@@ -289,8 +295,10 @@ export interface RecordImportResponse {
   /** Null when no row could be read. */
   record: StoredGroundMotionRecord | null;
   errors: { row: number; column: string; message: string }[];
-  /** How the file was read, in words. */
-  readAs: string;
+  /** How the file's numbers were read. */
+  readAs: ImportReadAs;
+  /** How the time step was found, in words ("from the time column: 0.01 s"). */
+  timeStepFrom: string;
 }
 
 /** One storey's peak from the response history beside the spectrum method's combined value. */
@@ -338,4 +346,63 @@ export function historyComparison(
 /** The default period range for scaling to the design spectrum: 0.2 T1 to 2 T1. */
 export function defaultScalingRange(fundamentalPeriod: number): [number, number] {
   return [0.2 * fundamentalPeriod, 2 * fundamentalPeriod];
+}
+
+/**
+ * At most `points` samples of a history for drawing: split into points / 2 spans, each giving its
+ * least and greatest sample in time order, so every peak and trough stays (the line's envelope is
+ * the full history's). A shorter history is given whole. Sample k is at k dt.
+ */
+export function decimated(values: ArrayLike<number>, dt: number, points: number): SampledHistory {
+  const whole = (): SampledHistory => ({
+    times: Array.from(values, (_, k) => k * dt),
+    values: Array.from(values),
+  });
+  if (values.length <= points) return whole();
+  const spans = Math.floor(points / 2);
+  const width = values.length / spans;
+  const out: SampledHistory = { times: [], values: [] };
+  for (let b = 0; b < spans; b++) {
+    const from = Math.floor(b * width);
+    const to = Math.min(values.length, Math.floor((b + 1) * width));
+    let lo = from;
+    let hi = from;
+    for (let k = from + 1; k < to; k++) {
+      if (values[k] < values[lo]) lo = k;
+      if (values[k] > values[hi]) hi = k;
+    }
+    for (const k of lo === hi ? [lo] : lo < hi ? [lo, hi] : [hi, lo]) {
+      out.times.push(k * dt);
+      out.values.push(values[k]);
+    }
+  }
+  return out;
+}
+
+/** `count` periods spaced evenly in log T from `from` to `to` (s). */
+export function logPeriods(from: number, to: number, count: number): number[] {
+  const ratio = Math.log(to / from);
+  return Array.from({ length: count }, (_, i) => from * Math.exp((ratio * i) / (count - 1)));
+}
+
+/** The periods a record's scale factor is found at: 50, even in log T over the range. */
+export const scalingPeriods = (range: readonly [number, number]): number[] =>
+  logPeriods(range[0], range[1], 50);
+
+/**
+ * The factor that scales a record to the design spectrum over a period range, from the unscaled
+ * record's Sa and the design Sa at `scalingPeriods(range)`: `mean`, the ratio of their means (the
+ * scaled record then has the design spectrum's mean over the range; common practice);
+ * `not-below-90`, the least factor keeping the record at or above 90 % of the design spectrum at
+ * every one of those periods (EN 1998-1 3.2.3.1.2(4)c, there for the mean of a set of records).
+ */
+export function spectrumScaleFactor(
+  rule: 'mean' | 'not-below-90',
+  recordSa: readonly number[],
+  designSa: readonly number[],
+): number {
+  if (rule === 'mean') {
+    return designSa.reduce((a, b) => a + b, 0) / recordSa.reduce((a, b) => a + b, 0);
+  }
+  return Math.max(...designSa.map((value, i) => (0.9 * value) / recordSa[i]));
 }

@@ -2,6 +2,9 @@ import { BadRequestException, Injectable } from '@nestjs/common';
 import type {
   AnalysisRequest,
   AnalysisResponse,
+  CalculationInputs,
+  ResponseHistoryResult,
+  ResponseHistorySetup,
   ChecksRequest,
   ChecksResponse,
   ColumnStiffnessRequest,
@@ -9,6 +12,7 @@ import type {
 } from '@tiermode/shared-types';
 import { analyse, assertAnalysisRequest } from './engine/analyse';
 import { runChecks } from './engine/checks/run-checks';
+import { assertHistorySetup, calcResponseHistory } from './engine/history/calc-history';
 import { storeyStiffnessFromColumns } from './engine/column-stiffness';
 
 @Injectable()
@@ -47,6 +51,16 @@ export class AnalysisService {
     return asBadRequest(() => runChecks(JSON.parse(JSON.stringify(request)) as ChecksRequest));
   }
 
+  /** Refuses a response history setup that cannot be run on `levels` levels, naming the field. */
+  validateHistory(setup: ResponseHistorySetup, levels: number): void {
+    asBadRequest(() => assertHistorySetup(setup, levels));
+  }
+
+  /** A calc's response history (engine/history/calc-history.ts). */
+  responseHistoryOf(inputs: CalculationInputs, setup: ResponseHistorySetup): ResponseHistoryResult {
+    return asBadRequest(() => calcResponseHistory(inputs, setup));
+  }
+
   columnStiffness(request: ColumnStiffnessRequest): ColumnStiffnessResponse {
     return asBadRequest(() => {
       const contributions = request.columns.map((group) =>
@@ -61,7 +75,7 @@ export class AnalysisService {
 }
 
 /** The engine's RangeError/TypeError name the field: they are the caller's 400s. */
-function asBadRequest<T>(run: () => T): T {
+export function asBadRequest<T>(run: () => T): T {
   try {
     return run();
   } catch (error) {

@@ -17,6 +17,8 @@ import {
   type ChecksResponse,
   type CodeBasisParameters,
   type DisplayUnits,
+  type ResponseHistoryResult,
+  type ResponseHistorySetup,
   type CalculationStatus,
   type SealDto,
 } from '@tiermode/shared-types';
@@ -35,6 +37,8 @@ export class Calculation {
     | 'displayUnits'
     | 'basis'
     | 'checks'
+    | 'history'
+    | 'historyResults'
     | 'status'
     | 'analysis'
     | 'engineVersion'
@@ -78,6 +82,14 @@ export class Calculation {
   /** The checks made with the stored analysis, by the same engine version (sealed with it). */
   @Property({ type: 'json', nullable: true })
   checks: ChecksResponse | null = null;
+
+  /** The response history's record and setup (an input: sealed with the calc when set). */
+  @Property({ type: 'json', nullable: true })
+  history: ResponseHistorySetup | null = null;
+
+  /** The response history made with the stored analysis, by the same engine (sealed with it). */
+  @Property({ type: 'json', nullable: true })
+  historyResults: ResponseHistoryResult | null = null;
 
   /** How the calc is shown (values are SI whatever this says); not sealed, it changes no number. */
   @Property({ type: 'string', length: 2, default: 'SI' })
@@ -231,6 +243,7 @@ export class Calculation {
     next.inputs = structuredClone(this.inputs);
     next.displayUnits = this.displayUnits;
     next.basis = this.basis ? structuredClone(this.basis) : null;
+    next.history = this.history ? structuredClone(this.history) : null;
     next.author = author;
     next.previousRevision = this;
     return next;

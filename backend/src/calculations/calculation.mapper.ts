@@ -21,6 +21,8 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     displayUnits: calc.displayUnits,
     basis: calc.basis,
     checks: calc.checks,
+    history: calc.history,
+    historyResults: calc.historyResults,
     analysis: calc.analysis,
     engineVersion: calc.engineVersion,
     inputsChangedAt: calc.inputsChangedAt.toISOString(),

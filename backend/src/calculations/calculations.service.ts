@@ -202,6 +202,12 @@ export class CalculationsService {
       calc.inputs = inputs;
       calc.inputsChangedAt = new Date();
     }
+    if (body.history !== undefined) {
+      calc.history = body.history === null ? null : (plainInputs(body.history as never) as never);
+      // A new record or scaling means a new response history: stale until analysed again.
+      calc.inputsChangedAt = new Date();
+      if (calc.history) this.analysis.validateHistory(calc.history, calc.inputs.storeys.length);
+    }
     await this.audit.commit(this.em, {
       calculationId: calc.id,
       actor,
@@ -211,6 +217,12 @@ export class CalculationsService {
         inputs: body.inputs !== undefined,
         displayUnits: body.displayUnits ?? null,
         basis: body.basis === undefined ? null : (body.basis?.code ?? 'removed'),
+        history:
+          body.history === undefined
+            ? null
+            : body.history === null
+              ? 'removed'
+              : body.history.record.name,
         // What changed, in a few words each: "storey 2 mass", "spectrum points", "basis sds".
         changes: [
           ...(before.title !== calc.title ? ['title'] : []),
@@ -228,6 +240,10 @@ export class CalculationsService {
     const { analysis: result, checks } = calc.basis
       ? this.analysis.analyseAndCheck({ ...calc.inputs, basis: calc.basis })
       : { analysis: this.analysis.analyse(calc.inputs), checks: null };
+    // With a record, its response history is made beside the analysis and stored with it.
+    calc.historyResults = calc.history
+      ? this.analysis.responseHistoryOf(calc.inputs, calc.history)
+      : null;
     calc.analysis = result;
     calc.checks = checks;
     calc.engineVersion = result.engineVersion;

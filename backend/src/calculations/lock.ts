@@ -50,6 +50,7 @@ export function sealedContentOf(
     lockedAt: seal.lockedAt,
     // Only when present, so the seals of calcs without them stay as they were made.
     ...(calc.basis ? { basis: calc.basis, checks: calc.checks } : {}),
+    ...(calc.history ? { history: calc.history, historyResults: calc.historyResults } : {}),
     ...(calc.attachments.isInitialized() && calc.attachments.length > 0
       ? {
           attachments: calc.attachments

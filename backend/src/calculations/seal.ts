@@ -30,6 +30,9 @@ export interface SealedContent {
   /** The code basis and the checks made with the analysis; absent when there is no basis. */
   basis?: unknown;
   checks?: unknown;
+  /** The response history's record and setup and its results; absent when there is none. */
+  history?: unknown;
+  historyResults?: unknown;
   /** The files kept with the calc, by name and SHA-256; absent when there are none. */
   attachments?: { fileName: string; sha256: string; size: number }[];
 }

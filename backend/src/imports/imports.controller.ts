@@ -16,10 +16,14 @@ import {
   type DisplayUnits,
   type ImportCellError,
   type SpectrumImportResponse,
+  ACCELERATION_UNITS,
+  type AccelerationUnits,
+  type RecordImportResponse,
   type StoreyImportResponse,
 } from '@tiermode/shared-types';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { readTable } from './read-table';
+import { parseRecordTable } from './record-table';
 import { parseSpectrumTable } from './spectrum-table';
 import { parseStoreyTable } from './storey-table';
 import { storeyTemplateCsv, storeyTemplateXlsx, XLSX_TYPE } from './templates';
@@ -108,6 +112,51 @@ export class ImportsController {
     if (!file) throw new BadRequestException(['file must be a CSV or XLSX table of period and Sa']);
     return refuseWithPreview(
       parseSpectrumTable(await readTable(file.buffer), decimalOf(body?.decimal)),
+    );
+  }
+
+  @ApiContract({
+    summary: 'Read a ground-motion record (CSV or plain text); nothing is stored',
+    returns: 'RecordImportResponse',
+    upload: {
+      description:
+        'One column of accelerations (give timeStep) or two columns, time (s) and acceleration; units as chosen',
+      fields: {
+        units: { type: 'string', enum: [...ACCELERATION_UNITS] },
+        timeStep: { type: 'number' },
+        decimal: { type: 'string', enum: ['point', 'comma'] },
+      },
+    },
+  })
+  @Post('record')
+  @Expensive()
+  @HttpCode(200)
+  @CheckPolicies((ability) => ability.can('create', 'Analysis'))
+  @UseInterceptors(uploadLimits(TABLE_LIMIT, '2 MB'))
+  async record(
+    @UploadedFile() file: Express.Multer.File | undefined,
+    @Body() body: Record<string, unknown>,
+  ): Promise<RecordImportResponse> {
+    const units = body?.units;
+    if (typeof units !== 'string' || !(ACCELERATION_UNITS as readonly string[]).includes(units)) {
+      throw new BadRequestException([
+        `units must be one of ${ACCELERATION_UNITS.join(', ')} (the record's accelerations)`,
+      ]);
+    }
+    const step = body?.timeStep;
+    const timeStep = step === undefined || step === '' ? undefined : Number(step);
+    if (timeStep !== undefined && !(Number.isFinite(timeStep) && timeStep > 0)) {
+      throw new BadRequestException(['timeStep must be a number of seconds greater than 0']);
+    }
+    if (!file) throw new BadRequestException(['file must be a CSV or text file of accelerations']);
+    const name = (file.originalname || 'record').replace(/\.[^.]+$/, '').slice(0, 200) || 'record';
+    return refuseWithPreview(
+      parseRecordTable(await readTable(file.buffer), {
+        units: units as AccelerationUnits,
+        timeStep,
+        decimal: decimalOf(body?.decimal),
+        name,
+      }),
     );
   }
 

@@ -26,6 +26,14 @@ export interface ContractTypes {
   CreateCommentRequest: C.CreateCommentRequest;
   CreateProjectRequest: C.CreateProjectRequest;
   CreateUserRequest: C.CreateUserRequest;
+  DemoRecordResponse: C.DemoRecordResponse;
+  FreeVibrationRequest: C.FreeVibrationRequest;
+  FreeVibrationResponse: C.FreeVibrationResponse;
+  RecordImportResponse: C.RecordImportResponse;
+  RecordSpectrumRequest: C.RecordSpectrumRequest;
+  RecordSpectrumResponse: C.RecordSpectrumResponse;
+  ResponseHistoryRequest: C.ResponseHistoryRequest;
+  ResponseHistoryResponse: C.ResponseHistoryResponse;
   HealthResponse: C.HealthResponse;
   LibraryEntryDto: C.LibraryEntryDto;
   LockCalculationRequest: C.LockCalculationRequest;

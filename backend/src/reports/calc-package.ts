@@ -10,8 +10,9 @@ import {
 } from '@tiermode/shared-types';
 import { formats as f, inUnits, isoDate, withUnit } from './formats';
 import { lineChart } from './pdf-chart';
-import { finish, heading, MARGIN, newDocument, write, type Doc } from './pdf-kit';
+import { finish, heading, keyValues, MARGIN, newDocument, write, type Doc } from './pdf-kit';
 import { table } from './pdf-table';
+import { historySection } from './history-section';
 
 const CAUTION =
   'This analysis is an aid to an engineer’s judgement. The locally adopted building code governs, ' +
@@ -23,19 +24,6 @@ const STATUS = {
   locked: 'Locked: calc of record',
   superseded: 'Superseded by a newer revision',
 } as const;
-
-function keyValues(doc: Doc, pairs: [string, string][]): void {
-  for (const [key, value] of pairs) {
-    const y = doc.y;
-    doc.font('bold').text(key, MARGIN, y, { width: 125 });
-    const afterKey = doc.y;
-    doc.x = MARGIN + 130;
-    doc.y = y;
-    write(doc, value || '-', { width: 365 });
-    doc.x = MARGIN;
-    doc.y = Math.max(afterKey, doc.y) + 2;
-  }
-}
 
 function cover(doc: Doc, calc: CalculationDto, check: SealCheckResponse | null, at: Date) {
   doc.fontSize(20);
@@ -526,6 +514,7 @@ export async function buildCalcPackage(
   method(doc);
   doc.addPage();
   results(doc, calc, units);
+  historySection(doc, calc, units);
   review(doc, calc, units);
   decorate(doc, calc);
   return finish(doc);

@@ -65,3 +65,17 @@ export function finish(doc: Doc): Promise<Buffer> {
     doc.end();
   });
 }
+
+/** Bold keys in a column, their values beside them. */
+export function keyValues(doc: Doc, pairs: [string, string][]): void {
+  for (const [key, value] of pairs) {
+    const y = doc.y;
+    doc.font('bold').text(key, MARGIN, y, { width: 125 });
+    const afterKey = doc.y;
+    doc.x = MARGIN + 130;
+    doc.y = y;
+    write(doc, value || '-', { width: 365 });
+    doc.x = MARGIN;
+    doc.y = Math.max(afterKey, doc.y) + 2;
+  }
+}

@@ -1,7 +1,7 @@
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { ANALYSIS_LIMITS } from '@tiermode/shared-types';
+import { HISTORY_LIMITS, ANALYSIS_LIMITS } from '@tiermode/shared-types';
 import { JSON_BODY_LIMIT } from '../../src/app.setup';
 import { DEMO_PASSWORD } from '../../src/database/demo-accounts';
 import { ASCE_BASIS } from '../support/fixtures';
@@ -88,7 +88,7 @@ describe('Requests that cannot be read', () => {
   it('answers a body over the limit with 413 naming the limit', async () => {
     const res = await post('/api/analysis', `{"pad": "${'x'.repeat(JSON_BODY_LIMIT)}"}`);
     expect(res.status).toBe(413);
-    expect(res.body.message).toEqual(['The request body is too large (the limit is 1024 KB)']);
+    expect(res.body.message).toEqual(['The request body is too large (the limit is 4096 KB)']);
   });
 
   it('accepts the largest request the API allows, with room to spare', async () => {
@@ -128,5 +128,23 @@ describe('Requests that cannot be read', () => {
     const res = await post('/api/checks', body);
     expect(res.status).toBe(200);
     expect((res.body as unknown as { storeys: unknown[] }).storeys).toHaveLength(n);
+  });
+
+  it('accepts the longest ground-motion record, written at full precision', async () => {
+    // 60,000 samples, each with 17 significant digits, indented: the largest record allowed.
+    const accelerations = Array.from(
+      { length: HISTORY_LIMITS.maxRecordSteps },
+      (_, k) => -0.123456789012345 * Math.sin(k / 9.1) - 1e-17,
+    );
+    const body = JSON.stringify(
+      { record: { timeStep: 0.0005, units: 'g', accelerations }, dampingRatio: 0.05, periods: [1] },
+      null,
+      2,
+    );
+    expect(body.length).toBeGreaterThan(1024 * 1024);
+    expect(body.length).toBeLessThan(JSON_BODY_LIMIT);
+    const res = await post('/api/record-spectrum', body);
+    expect(res.status).toBe(200);
+    expect((res.body as unknown as { sa: number[] }).sa).toHaveLength(1);
   });
 });

@@ -1,3 +1,4 @@
+import { ResponseHistorySetupDto } from '../../analysis/dto/history.dto';
 import {
   DISPLAY_UNITS,
   type CodeBasisParameters,
@@ -69,4 +70,11 @@ export class UpdateCalculationDto implements UpdateCalculationRequest {
   @ValidateNested()
   @Type(() => CodeBasisDto)
   basis?: (CodeBasisParameters & CodeBasisDto) | null;
+
+  @IsOmittable()
+  @ValidateIf((_, value) => value !== null)
+  @IsObject({ message: 'history must be an object { record, scaling, freeVibration? } or null' })
+  @ValidateNested()
+  @Type(() => ResponseHistorySetupDto)
+  history?: ResponseHistorySetupDto | null;
 }

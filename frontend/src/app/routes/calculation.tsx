@@ -1,5 +1,15 @@
 import { formatDateTime } from '@tiermode/shared-types';
-import { Alert, Button, LinearProgress, Link, Stack, Tab, Tabs, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  LinearProgress,
+  Link,
+  Stack,
+  Tab,
+  Tabs,
+  Typography,
+} from '@mui/material';
 import type { CalculationDto, UserDto } from '@tiermode/shared-types';
 import { AxiosError } from 'axios';
 import { useState } from 'react';
@@ -9,7 +19,8 @@ import { CautionBanner } from '@/components/feedback/caution-banner';
 import { LeaveGuard } from '@/components/feedback/leave-guard';
 import { StatusChip } from '@/components/feedback/status-chip';
 import { AnalysisSettings } from '@/features/analysis/components/analysis-settings';
-import { AnalysisResults, Section } from '@/features/analysis/components/results/analysis-results';
+import { Section } from '@/components/layouts/section';
+import { AnalysisResults } from '@/features/analysis/components/results/analysis-results';
 import { SpectrumEditor } from '@/features/analysis/components/spectrum-editor';
 import { StoreyTable } from '@/features/analysis/components/storey-table';
 import { UnitsToggle } from '@/features/analysis/components/units-toggle';
@@ -28,6 +39,7 @@ import { CommentThread } from '@/features/calculations/components/comment-thread
 import { DeleteDraftButton } from '@/features/calculations/components/delete-draft-button';
 import { DownloadsMenu } from '@/features/calculations/components/downloads-menu';
 import { HistoryPanel } from '@/features/calculations/components/history-panel';
+import { ResponseHistoryTab } from '@/features/response-history/components/response-history-tab';
 import { PreliminaryWatermark } from '@/features/calculations/components/preliminary-watermark';
 import { ReviewActions } from '@/features/calculations/components/review-actions';
 import { SealPanel } from '@/features/calculations/components/seal-panel';
@@ -37,7 +49,15 @@ import '@/lib/charts';
 import { sameJson } from '@/lib/same-json';
 import type { UnitSystem } from '@/lib/units';
 
-const TABS = ['Storey table', 'Design spectrum', 'Results', 'Checks', 'Review', 'History'] as const;
+const TABS = [
+  'Storey table',
+  'Design spectrum',
+  'Results',
+  'Checks',
+  'Response history',
+  'Review',
+  'Audit trail',
+] as const;
 type TabName = (typeof TABS)[number];
 
 /** Each tab's name in the address (`?tab=results`), so Back returns to the tab before. */
@@ -46,11 +66,15 @@ const TAB_SLUGS: Record<TabName, string> = {
   'Design spectrum': 'spectrum',
   Results: 'results',
   Checks: 'checks',
+  'Response history': 'response-history',
   Review: 'review',
-  History: 'history',
+  'Audit trail': 'audit',
 };
 const tabOf = (slug: string | null): TabName =>
-  TABS.find((name) => TAB_SLUGS[name] === slug) ?? 'Storey table';
+  // `history` was the audit trail's slug before the response history had a tab.
+  slug === 'history'
+    ? 'Audit trail'
+    : (TABS.find((name) => TAB_SLUGS[name] === slug) ?? 'Storey table');
 
 /** A saved calculation: its inputs, stored results, review and history, in tabs. */
 export function CalculationRoute() {
@@ -76,6 +100,10 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
       return next;
     });
   const save = useSaveCalculation(calc.id);
+  // The response history tab's record and settings, not kept yet.
+  const [historyDirty, setHistoryDirty] = useState(false);
+  const [historyVisited, setHistoryVisited] = useState(false);
+  if (tab === 'Response history' && !historyVisited) setHistoryVisited(true);
   const analyse = useSaveAndAnalyse(calc.id);
 
   const record = {
@@ -130,7 +158,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
 
   return (
     <Stack spacing={2}>
-      <LeaveGuard when={dirty && !busy} what="edits to this calc" />
+      <LeaveGuard when={(dirty || historyDirty) && !busy} what="edits to this calc" />
       <Stack
         direction="row"
         sx={{ alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap', gap: 1 }}
@@ -171,7 +199,7 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
       )}
       {calc.status === 'superseded' && (
         <Alert severity="warning">
-          Superseded: a newer revision of this calc has been locked. See History.
+          Superseded: a newer revision of this calc has been locked. See the audit trail.
         </Alert>
       )}
       {calc.seal && <SealPanel calc={calc} />}
@@ -352,8 +380,22 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
             />
           </Section>
         )}
-        {tab === 'History' && (
-          <Section title="History">
+        {/* Mounted on the first visit and kept (hidden) after, so its unsaved setup survives a
+            look at another tab. */}
+        {historyVisited && (
+          <Box sx={{ display: tab === 'Response history' ? 'block' : 'none' }}>
+            <ResponseHistoryTab
+              calc={calc}
+              units={units}
+              editable={editable}
+              saving={save.isPending}
+              onSave={(history) => save.mutate({ version: calc.version, history })}
+              onDirtyChange={setHistoryDirty}
+            />
+          </Box>
+        )}
+        {tab === 'Audit trail' && (
+          <Section title="Audit trail">
             <HistoryPanel calc={calc} />
           </Section>
         )}

@@ -1,8 +1,8 @@
-import type { GroundMotionRecord } from '@tiermode/shared-types';
+import { decimated, logPeriods, type GroundMotionRecord } from '@tiermode/shared-types';
 import { freeVibration } from '../history/free-vibration';
 import { demoRecord, DEMO_RECORD_NAME } from '../history/record';
-import { recordScaleFactor, recordSpectrum, logPeriods } from '../history/record-spectrum';
-import { decimated, responseHistory } from '../history/response-history';
+import { recordScaleFactor, recordSpectrum } from '../history/record-spectrum';
+import { responseHistory } from '../history/response-history';
 import { sdofStep } from '../history/sdof-recursion';
 import { naturalModes } from '../modes';
 import { STANDARD_GRAVITY as G } from '../modal-response';

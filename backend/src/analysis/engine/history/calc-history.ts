@@ -1,14 +1,15 @@
-import type {
-  CalculationInputs,
-  ResponseHistoryResult,
-  ResponseHistorySetup,
+import {
+  decimated,
+  type CalculationInputs,
+  type ResponseHistoryResult,
+  type ResponseHistorySetup,
 } from '@tiermode/shared-types';
 import { ENGINE_VERSION } from '../analyse';
 import { naturalModes } from '../modes';
 import { freeVibration } from './free-vibration';
 import { assertRecord } from './record';
 import { displayPeriods, recordScaleFactor, recordSpectrum } from './record-spectrum';
-import { decimated, responseHistory } from './response-history';
+import { responseHistory } from './response-history';
 
 /**
  * Checks a calc's response history setup against its storeys: the record (its samples named),
@@ -24,16 +25,16 @@ export function assertHistorySetup(setup: ResponseHistorySetup, levels: number):
   if (origin !== 'upload' && origin !== 'demo') {
     throw new RangeError('history.record.origin must be "upload" or "demo"');
   }
-  const start = setup.freeVibration;
-  if (start) {
-    for (const field of ['initialDisplacements', 'initialVelocities'] as const) {
-      const values = start[field];
-      if (values !== undefined && values.length !== levels) {
-        throw new RangeError(
-          `history.freeVibration.${field} must have one value per level (${levels}); the storeys changed since it was set`,
-        );
-      }
-    }
+  const start = setup.freeVibration?.start;
+  if (start?.kind === 'shape' && start.displacements.length !== levels) {
+    throw new RangeError(
+      `history.freeVibration.start.displacements must have one value per level (${levels}); the storeys changed since it was set`,
+    );
+  }
+  if (start?.kind === 'mode' && start.mode > levels) {
+    throw new RangeError(
+      `history.freeVibration.start.mode must be from 1 to ${levels} (the number of modes); the storeys changed since it was set`,
+    );
   }
 }
 
@@ -82,22 +83,33 @@ function freeVibrationSummary(
   setup: ResponseHistorySetup,
   inputs: CalculationInputs,
 ): ResponseHistoryResult['freeVibration'] {
-  const start = setup.freeVibration;
-  if (!start) return undefined;
+  const setupOf = setup.freeVibration;
+  if (!setupOf) return undefined;
+  const { start } = setupOf;
+  let initialDisplacements: number[];
+  let startedFrom: string;
+  if (start.kind === 'mode') {
+    const mode = naturalModes(inputs.storeys)[start.mode - 1];
+    initialDisplacements = mode.shape.map((p) => p * start.amplitude);
+    startedFrom = `mode ${start.mode} shape, ${start.amplitude} m at level ${mode.normalisationLevel}`;
+  } else {
+    initialDisplacements = start.displacements;
+    startedFrom = "the engineer's deflected shape";
+  }
   const run = withPath(
     () =>
       freeVibration({
         storeys: inputs.storeys,
         dampingRatio: inputs.dampingRatio,
-        initialDisplacements: start.initialDisplacements,
-        initialVelocities: start.initialVelocities,
-        duration: start.duration,
-        timeStep: start.timeStep,
+        initialDisplacements,
+        duration: setupOf.duration,
+        timeStep: setupOf.timeStep,
       }),
     'history.freeVibration.',
   );
   return {
-    startedFrom: start.startedFrom,
+    startedFrom,
+    initialDisplacements,
     peaks: run.peaks,
     modes: run.modes.map((m) => ({
       number: m.number,
@@ -107,7 +119,7 @@ function freeVibrationSummary(
     })),
     roofDisplacement: decimated(
       run.displacements[run.displacements.length - 1],
-      start.timeStep,
+      setupOf.timeStep,
       2000,
     ),
   };

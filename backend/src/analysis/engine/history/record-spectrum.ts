@@ -1,6 +1,9 @@
 import {
   HISTORY_LIMITS,
   interpolateSpectrum,
+  logPeriods,
+  scalingPeriods,
+  spectrumScaleFactor,
   type RecordScaling,
   type RecordSpectrumRequest,
   type RecordSpectrumResponse,
@@ -83,12 +86,6 @@ export function recordSpectrum(request: RecordSpectrumRequest): RecordSpectrumRe
   return { periods: [...request.periods], sa, sd, dampingRatio: request.dampingRatio };
 }
 
-/** `count` periods spaced evenly in log T from `from` to `to` (s). */
-export function logPeriods(from: number, to: number, count: number): number[] {
-  const ratio = Math.log(to / from);
-  return Array.from({ length: count }, (_, i) => from * Math.exp((ratio * i) / (count - 1)));
-}
-
 /** The periods a calc's record spectrum is drawn at: 0, 0.02 to 10 s (120 in log T), the modes'. */
 export function displayPeriods(modalPeriods: readonly number[]): number[] {
   const grid = [0, ...logPeriods(0.02, 10, 120), ...modalPeriods.filter((t) => t <= 50)];
@@ -130,7 +127,7 @@ export function recordScaleFactor(
       `scaling.periodRange must be two periods in s, 0 < from < to <= ${HISTORY_LIMITS.maxSpectrumPeriod}`,
     );
   }
-  const periods = logPeriods(from, to, 50);
+  const periods = scalingPeriods([from, to]);
   const { sa } = recordSpectrum({ record, dampingRatio, periods });
   const target = periods.map((t) => {
     const value = interpolateSpectrum(design.points, t, design.interpolation);
@@ -145,10 +142,7 @@ export function recordScaleFactor(
     throw new RangeError('scaling: the record has no response in the period range (all zero)');
   }
   const range = `${+from.toPrecision(3)} s to ${+to.toPrecision(3)} s`;
-  const factor =
-    scaling.rule === 'mean'
-      ? target.reduce((a, b) => a + b, 0) / sa.reduce((a, b) => a + b, 0)
-      : Math.max(...target.map((value, i) => (0.9 * value) / sa[i]));
+  const factor = spectrumScaleFactor(scaling.rule, sa, target);
   if (!(factor > 0) || factor > HISTORY_LIMITS.maxScale) {
     throw new RangeError(
       `scaling: the factor found (${factor.toPrecision(3)}) is outside 0 to ${HISTORY_LIMITS.maxScale}; check the record's units`,

@@ -4,6 +4,7 @@ import {
   type ResponseHistoryResponse,
   type SampledHistory,
   type StoreyHistoryValues,
+  decimated,
 } from '@tiermode/shared-types';
 import { ENGINE_VERSION } from '../analyse';
 import { SIGNIFICANT_MASS_RATIO } from '../analysis-warnings';
@@ -142,7 +143,7 @@ export function responseHistory(
   }
 
   const times = (values: Float64Array): SampledHistory =>
-    request.full ? everySample(values, dt) : decimated(values, dt, HISTORY_LIMITS.displayPoints);
+    decimated(values, dt, request.full ? Infinity : HISTORY_LIMITS.displayPoints);
   const agInG = ag.map(toG);
   const decimate = !request.full && steps > HISTORY_LIMITS.displayPoints;
   const baseShearPeak = { value: peaks.shear[0], time: peakTimes.shear[0] };
@@ -263,35 +264,4 @@ function track(peaks: number[], times: number[], i: number, value: number, t: nu
     peaks[i] = size;
     times[i] = t;
   }
-}
-
-function everySample(values: ArrayLike<number>, dt: number): SampledHistory {
-  return { times: Array.from(values, (_, k) => k * dt), values: Array.from(values) };
-}
-
-/**
- * At most `points` samples for drawing: the history split into points / 2 spans, each giving its
- * least and greatest sample in time order, so every peak and trough stays (the line's envelope is
- * the full history's). Shorter histories are given whole.
- */
-export function decimated(values: ArrayLike<number>, dt: number, points: number): SampledHistory {
-  if (values.length <= points) return everySample(values, dt);
-  const spans = Math.floor(points / 2);
-  const width = values.length / spans;
-  const out: SampledHistory = { times: [], values: [] };
-  for (let b = 0; b < spans; b++) {
-    const from = Math.floor(b * width);
-    const to = Math.min(values.length, Math.floor((b + 1) * width));
-    let lo = from;
-    let hi = from;
-    for (let k = from + 1; k < to; k++) {
-      if (values[k] < values[lo]) lo = k;
-      if (values[k] > values[hi]) hi = k;
-    }
-    for (const k of lo === hi ? [lo] : lo < hi ? [lo, hi] : [hi, lo]) {
-      out.times.push(k * dt);
-      out.values.push(values[k]);
-    }
-  }
-  return out;
 }

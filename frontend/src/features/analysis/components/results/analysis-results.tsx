@@ -1,6 +1,6 @@
-import { Alert, Box, Card, CardContent, Typography } from '@mui/material';
+import { Alert, Box, Typography } from '@mui/material';
 import type { AnalysisResponse, StoreyInput } from '@tiermode/shared-types';
-import type { ReactNode } from 'react';
+import { Section } from '@/components/layouts/section';
 import type { UnitSystem } from '@/lib/units';
 import { elevations } from '../../model/storey-rows';
 import { CorrelationTable } from './correlation-table';
@@ -11,19 +11,6 @@ import { ImplausibleResultsAlert } from './implausible-results-alert';
 import { ModesTable } from './modes-table';
 import { ResponseProfiles } from './response-profiles';
 import { StoreyResponsesTable } from './storey-responses-table';
-
-export function Section({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <Card variant="outlined" component="section" aria-label={title}>
-      <CardContent>
-        <Typography variant="h2" gutterBottom>
-          {title}
-        </Typography>
-        {children}
-      </CardContent>
-    </Card>
-  );
-}
 
 /**
  * Everything an analysis returns, for the storeys it was computed from: warnings, modes and

@@ -1,14 +1,12 @@
 import PauseIcon from '@mui/icons-material/Pause';
 import PlayArrowIcon from '@mui/icons-material/PlayArrow';
-import { Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import type { ModeResult } from '@tiermode/shared-types';
 import { useEffect, useRef, useState } from 'react';
+import { BuildingDrawing } from '@/components/data-display/building-drawing';
 import { formatNumber } from '@/lib/units';
 import { swayAt, swayBound } from '../../model/sway';
 
-const WIDTH = 280;
-const HEIGHT = 340;
-const PAD = 24;
 /** Real seconds one cycle of the slowest chosen mode takes at speed 1. */
 const SECONDS_PER_CYCLE = 2.5;
 const SPEEDS = [0.25, 0.5, 1, 2] as const;
@@ -48,65 +46,18 @@ export function SwayAnimation({
     };
   }, [playing, speed, slowdown, modes.length]);
 
-  const top = elevations[elevations.length - 1] ?? 1;
   const bound = swayBound(modes) || 1;
   const u = swayAt(modes, time);
-  const y = (h: number) => HEIGHT - PAD - (h / top) * (HEIGHT - 2 * PAD);
-  // The widest sway reaches a quarter of the width either side of the centre.
-  const x = (shift: number) => WIDTH / 2 + (shift / bound) * (WIDTH / 4);
-  const halfBay = WIDTH / 6;
-  const levels = [0, ...elevations];
-  const shifts = [0, ...u];
   const names = modes.map((m) => m.number).join(', ');
 
   return (
     <Stack spacing={1} sx={{ alignItems: 'flex-start' }}>
-      <Box
-        component="svg"
-        role="img"
-        aria-label={`The building swaying in mode${modes.length > 1 ? 's' : ''} ${names}, each level moving as the sum of its modal cosines`}
-        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
-        sx={{ width: WIDTH, maxWidth: '100%', height: 'auto', bgcolor: 'grey.50' }}
-      >
-        <line x1={PAD / 2} x2={WIDTH - PAD / 2} y1={y(0)} y2={y(0)} stroke="#555" strokeWidth={3} />
-        {levels.slice(1).map((h, k) => {
-          const i = k + 1;
-          const below = levels[i - 1];
-          return (
-            <g key={i}>
-              {/* The still building, for reference. */}
-              <rect
-                x={WIDTH / 2 - halfBay}
-                y={y(h)}
-                width={2 * halfBay}
-                height={y(below) - y(h)}
-                fill="none"
-                stroke="#bbb"
-                strokeDasharray="3 3"
-              />
-              {[-halfBay, halfBay].map((side) => (
-                <line
-                  key={side}
-                  x1={x(shifts[i - 1]) + side}
-                  y1={y(below)}
-                  x2={x(shifts[i]) + side}
-                  y2={y(h)}
-                  stroke="#23465f"
-                  strokeWidth={2}
-                />
-              ))}
-              <line
-                x1={x(shifts[i]) - halfBay - 6}
-                x2={x(shifts[i]) + halfBay + 6}
-                y1={y(h)}
-                y2={y(h)}
-                stroke="#b5541c"
-                strokeWidth={4}
-              />
-            </g>
-          );
-        })}
-      </Box>
+      <BuildingDrawing
+        elevations={elevations}
+        shifts={u}
+        bound={bound}
+        label={`The building swaying in mode${modes.length > 1 ? 's' : ''} ${names}, each level moving as the sum of its modal cosines`}
+      />
       <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
         <Button
           variant="outlined"

@@ -1,0 +1,9 @@
+import { Migration } from '@mikro-orm/migrations';
+
+/** A calc's response history: its record and setup (an input) and its stored results. */
+export class Migration20261203171500 extends Migration {
+  override async up(): Promise<void> {
+    this.addSql('alter table `calculations` add column `history` json null;');
+    this.addSql('alter table `calculations` add column `history_results` json null;');
+  }
+}
