@@ -71,8 +71,9 @@ describe('Accessibility (axe-core, WCAG 2.1 AA): no serious or critical violatio
         'Design spectrum',
         'Results',
         'Checks',
+        'Response history',
         'Review',
-        'History',
+        'Audit trail',
       ]);
       await nav(page, 'Quick analysis');
       await page.getByRole('table', { name: 'Modes' }).waitFor();
@@ -109,7 +110,12 @@ describe('Accessibility (axe-core, WCAG 2.1 AA): no serious or critical violatio
       await expectAccessible(page, 'library');
       await page.getByRole('link', { name: LOCKED }).first().click();
       await page.getByRole('tab', { name: 'Results' }).waitFor();
-      await eachTab(page, 'locked calc', ['Storey table', 'Results', 'History']);
+      await eachTab(page, 'locked calc', [
+        'Storey table',
+        'Results',
+        'Response history',
+        'Audit trail',
+      ]);
     });
   });
 

@@ -100,8 +100,9 @@ describe('Any screen: 390 px phones, 768 px tablets, 1440 px desktops', () => {
           'Design spectrum',
           'Results',
           'Checks',
+          'Response history',
           'Review',
-          'History',
+          'Audit trail',
         ]) {
           await page.getByRole('tab', { name: tab }).click();
           await page.getByRole('tab', { name: tab, selected: true }).waitFor();

@@ -170,8 +170,8 @@ describe('The review workflow, across the four roles', () => {
       await openTab(page, 'Review');
       await page.getByText('Save your changes first.').waitFor();
       await analyse(page);
-      // The history names what the edit changed.
-      await openTab(page, 'History');
+      // The audit trail names what the edit changed.
+      await openTab(page, 'Audit trail');
       await page
         .getByRole('grid')
         .getByText('Inputs or title changed: storey 2 mass')

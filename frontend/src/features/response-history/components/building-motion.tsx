@@ -34,7 +34,10 @@ export function BuildingMotion({
   const roof = now[now.length - 1] ?? 0;
   const length = unitLabel(units, 'displacement');
   return (
-    <Stack spacing={1} sx={{ alignItems: 'flex-start', width: '100%' }}>
+    <Stack
+      spacing={1}
+      sx={{ alignItems: 'flex-start', flexShrink: 0, width: 300, maxWidth: '100%' }}
+    >
       <BuildingDrawing
         elevations={elevations}
         shifts={now}
@@ -75,7 +78,7 @@ export function BuildingMotion({
         valueLabelDisplay="auto"
         valueLabelFormat={(t) => `${formatNumber(t, 3)} s`}
         onChange={(_, t) => timeline.setTime(t)}
-        sx={{ maxWidth: 420 }}
+        sx={{ width: 280, maxWidth: '100%' }}
       />
       <Typography variant="caption" color="text.secondary" data-testid="motion-time">
         t = {formatNumber(timeline.time, 3)} s · roof{' '}
