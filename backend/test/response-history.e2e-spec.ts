@@ -1,5 +1,6 @@
 import { MikroORM } from '@mikro-orm/sqlite';
 import type {
+  AuditEventDto,
   CalculationDto,
   DemoRecordResponse,
   FreeVibrationResponse,
@@ -303,6 +304,22 @@ describe("A calc's response history", () => {
     expect(results.recordSpectrum.periods).toContain(stored.analysis!.modes[0].period);
     expect(results.freeVibration!.startedFrom).toContain('mode 1 shape, 0.05 m');
     expect(results.freeVibration!.initialDisplacements.at(-1)).toBeCloseTo(0.05, 12);
+
+    // The audit trail names what an edit of the setup changed.
+    await http()
+      .patch(`/api/calculations/${calc.id}`)
+      .set(as('designer'))
+      .send({
+        version: stored.version,
+        history: { ...stored.history, scaling: { method: 'factor', factor: 1.5 } },
+      })
+      .expect(200);
+    const events = (
+      await http().get(`/api/calculations/${calc.id}/history`).set(as('designer')).expect(200)
+    ).body as AuditEventDto[];
+    const edits = events.filter((e) => e.action === 'edited').map((e) => e.detail?.changes);
+    expect(edits).toContainEqual(['response history']);
+    expect(edits).toContainEqual(['record scaling']);
   });
 
   it.each([
@@ -390,6 +407,23 @@ describe("A calc's response history", () => {
     ).body as CalculationDto;
     expect(next.history).toEqual(calc.history);
     expect(next.historyResults).toBeNull();
+  });
+
+  it('goes out with the whole calc (JSON) and comes back into the imported draft', async () => {
+    const calc = await withHistory('History exported');
+    const exported = await http()
+      .get(`/api/calculations/${calc.id}/export.json`)
+      .set(as('designer'))
+      .expect(200);
+    expect(exported.body.calculation.history).toEqual(calc.history);
+    const imported = (
+      await http()
+        .post(`/api/projects/${calc.projectId}/calculations/import`)
+        .set(as('designer'))
+        .send(exported.body)
+        .expect(201)
+    ).body as CalculationDto;
+    expect(imported.history).toEqual(calc.history);
   });
 
   it("a write to a locked calc's history is refused with 409", async () => {

@@ -68,6 +68,8 @@ export interface CreateCalculationRequest {
   inputs: CalculationInputs;
   /** Default `SI`. */
   displayUnits?: DisplayUnits;
+  /** The response history's record and setup (e.g. from an exported calc); null for none. */
+  history?: ResponseHistorySetup | null;
 }
 
 /** `PATCH /api/calculations/:id`. */
@@ -266,6 +268,9 @@ export interface CalculationExport {
     engineVersion: string | null;
     analysedAt: string | null;
     seal: SealDto | null;
+    /** The response history's record and setup, and its results (absent in older files). */
+    history?: ResponseHistorySetup | null;
+    historyResults?: ResponseHistoryResult | null;
     comments: {
       author: string;
       target: string | null;

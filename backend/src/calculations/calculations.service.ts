@@ -17,6 +17,7 @@ import { isLicensed } from '../authorization/licence';
 import type { AppEnvironment } from '../config/environment';
 import {
   changeNames,
+  historyChanges,
   inputChanges,
   type AnalysisRequest,
   type AnalysisResponse,
@@ -150,10 +151,13 @@ export class CalculationsService {
     );
     const inputs = plainInputs(body.inputs);
     this.analysis.validate(inputs, 'inputs.');
+    const history = body.history ? (plainInputs(body.history as never) as never) : null;
+    if (history) this.analysis.validateHistory(history, inputs.storeys.length);
     const calc = this.em.create(Calculation, {
       project,
       title: body.title,
       inputs,
+      history,
       displayUnits: body.displayUnits ?? 'SI',
       author,
     });
@@ -187,7 +191,12 @@ export class CalculationsService {
       }
       throw error;
     }
-    const before = { inputs: calc.inputs, basis: calc.basis, title: calc.title };
+    const before = {
+      inputs: calc.inputs,
+      basis: calc.basis,
+      title: calc.title,
+      history: calc.history,
+    };
     if (body.title !== undefined) calc.title = body.title;
     // Display units change how values are shown, not what they are: the results stay current.
     if (body.displayUnits !== undefined) calc.displayUnits = body.displayUnits;
@@ -227,6 +236,7 @@ export class CalculationsService {
         changes: [
           ...(before.title !== calc.title ? ['title'] : []),
           ...changeNames(inputChanges(before, { inputs: calc.inputs, basis: calc.basis })),
+          ...historyChanges(before.history, calc.history),
         ],
       },
     });

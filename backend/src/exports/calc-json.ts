@@ -25,6 +25,8 @@ export function calcExport(calc: CalculationDto, exportedAt: Date): CalculationE
       engineVersion: calc.engineVersion,
       analysedAt: calc.analysedAt,
       seal: calc.seal,
+      history: calc.history,
+      historyResults: calc.historyResults,
       comments: calc.comments.map((c) => ({
         author: c.author.name,
         target: c.target,

@@ -157,7 +157,12 @@ export class ExportsController {
     @Param('id', UuidParam('id')) projectId: string,
     @Body() body: ImportCalculationDto,
   ): Promise<CalculationDto> {
-    const { title, inputs, displayUnits } = body.calculation;
-    return this.calculations.create(ability, user, projectId, { title, inputs, displayUnits });
+    const { title, inputs, displayUnits, history } = body.calculation;
+    return this.calculations.create(ability, user, projectId, {
+      title,
+      inputs,
+      displayUnits,
+      ...(history ? { history } : {}),
+    });
   }
 }

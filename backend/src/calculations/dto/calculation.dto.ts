@@ -40,6 +40,13 @@ export class CreateCalculationDto implements CreateCalculationRequest {
   @IsOmittable()
   @IsIn(DISPLAY_UNITS, { message: 'displayUnits must be "SI" or "US"' })
   displayUnits?: DisplayUnits;
+
+  @IsOmittable()
+  @ValidateIf((_, value) => value !== null)
+  @IsObject({ message: 'history must be an object { record, scaling, freeVibration? } or null' })
+  @ValidateNested()
+  @Type(() => ResponseHistorySetupDto)
+  history?: ResponseHistorySetupDto | null;
 }
 
 export class UpdateCalculationDto implements UpdateCalculationRequest {

@@ -14,6 +14,7 @@ class ExportedCalculationDto extends CreateCalculationDto {
   @Allow() engineVersion?: unknown;
   @Allow() analysedAt?: unknown;
   @Allow() seal?: unknown;
+  @Allow() historyResults?: unknown;
   @Allow() comments?: unknown;
 }
 
