@@ -1,5 +1,7 @@
 import type { Asce7Basis, En1998Basis, SpectrumInput } from '@tiermode/shared-types';
 import { analyse } from '../analysis/engine/analyse';
+import { freeVibration } from '../analysis/engine/history/free-vibration';
+import { responseHistory } from '../analysis/engine/history/response-history';
 import { runChecks } from '../analysis/engine/checks/run-checks';
 import { STANDARD_GRAVITY as G } from '../analysis/engine/modal-response';
 import { naturalModes } from '../analysis/engine/modes';
@@ -618,6 +620,115 @@ export const PUBLISHED_CASES: ReferenceCase[] = [
           quantity: 'theta',
           expected: (W * 4 * de) / (Vtot * 4),
           computed: checks.storeys[0].theta,
+        },
+      ];
+    },
+  },
+  {
+    id: 'sdof-step-response-peak',
+    title: 'One storey under a step of ground acceleration: the first peak',
+    source:
+      'Chopra, Dynamics of Structures, chapter 4 (response to a step force): the peak of a damped system is (1 + e^(-zeta pi / sqrt(1 - zeta^2))) times the static deflection, at t = pi / omega_D; worked by hand',
+    inputs: [
+      'm = 100 t, k = m omega^2 with omega_D = 2 pi rad/s (T_D = 1 s)',
+      'zeta = 0.05',
+      'a_g = 2 m/s^2 from t = 0, sampled at 0.01 s for 3 s',
+    ],
+    tolerance: 1e-9,
+    values: () => {
+      const zeta = 0.05;
+      const omega = (2 * Math.PI) / Math.sqrt(1 - zeta * zeta);
+      const record = {
+        timeStep: 0.01,
+        units: 'm/s2' as const,
+        accelerations: new Array<number>(301).fill(2),
+      };
+      const answer = responseHistory({
+        storeys: [{ mass: 1e5, stiffness: 1e5 * omega * omega, height: 3 }],
+        dampingRatio: zeta,
+        record,
+      });
+      const staticDeflection = 2 / (omega * omega);
+      return [
+        {
+          quantity: 'peak displacement (m)',
+          expected:
+            staticDeflection * (1 + Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta))),
+          computed: answer.peaks.displacement[0],
+        },
+        {
+          quantity: 'time of the peak (s)',
+          expected: 0.5,
+          computed: answer.peakTimes.displacement[0],
+        },
+      ];
+    },
+  },
+  {
+    id: 'two-storey-free-vibration',
+    title: 'Two-storey frame let go from its first mode shape: that mode alone, a cosine',
+    source:
+      'Chopra, Dynamics of Structures, chapter 10 (free vibration of undamped systems): from rest at a mode shape, u(t) = phi_1 q_0 cos(omega_1 t); the chapter 10 frame above, worked by hand',
+    inputs: ['the two-storey frame above, undamped', 'u(0) = 0.1 m x [1/2, 1], at rest'],
+    tolerance: 1e-9,
+    values: () => {
+      const omega1 = Math.sqrt(k / (2 * m));
+      const half = Math.PI / omega1;
+      const answer = freeVibration({
+        storeys: twoStorey,
+        dampingRatio: 0,
+        initialDisplacements: [0.05, 0.1],
+        duration: half,
+        timeStep: half / 100,
+      });
+      const last = answer.times.length - 1;
+      return [
+        { quantity: 'q_1(0) (m)', expected: 0.1, computed: answer.modes[0].initialCoordinate },
+        {
+          quantity: 'roof at half a period (m)',
+          expected: -0.1,
+          computed: answer.displacements[1][last],
+        },
+        {
+          quantity: 'level 1 at half a period (m)',
+          expected: -0.05,
+          computed: answer.displacements[0][last],
+        },
+      ];
+    },
+  },
+  {
+    id: 'half-sine-pulse-resonance',
+    title:
+      'One storey under a half-cycle sine pulse of ground acceleration lasting half its period',
+    source:
+      'Chopra, Dynamics of Structures, chapter 4 (half-cycle sine pulse): at t_d = T_n / 2 an undamped system reaches pi / 2 times the static deflection of the pulse amplitude; worked by hand (u = (p0 / 2k)(sin wt - wt cos wt) in the pulse, at rest slope at its end)',
+    inputs: [
+      'T_n = 1 s, undamped',
+      'a_g = 3 m/s^2 sin(pi t / 0.5 s) for 0.5 s, then 0',
+      'sampled at 0.0005 s',
+    ],
+    tolerance: 1e-5,
+    values: () => {
+      const omega = 2 * Math.PI;
+      const dt = 0.0005;
+      const record = {
+        timeStep: dt,
+        units: 'm/s2' as const,
+        accelerations: Array.from({ length: 4001 }, (_, i) =>
+          i * dt <= 0.5 ? 3 * Math.sin((Math.PI * i * dt) / 0.5) : 0,
+        ),
+      };
+      const answer = responseHistory({
+        storeys: [{ mass: 1e5, stiffness: 1e5 * omega * omega, height: 3 }],
+        dampingRatio: 0,
+        record,
+      });
+      return [
+        {
+          quantity: 'peak displacement (m)',
+          expected: (Math.PI / 2) * (3 / (omega * omega)),
+          computed: answer.peaks.displacement[0],
         },
       ];
     },
