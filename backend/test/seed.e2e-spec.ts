@@ -75,6 +75,10 @@ describe('Migrations and seeding', () => {
         true,
       );
       expect(locked.analysis?.modes).toHaveLength(7);
+      // The calc of record carries a response history under the invented demo record, sealed.
+      expect(locked.history?.record.origin).toBe('demo');
+      expect(locked.historyResults?.response.peaks.displacement).toHaveLength(7);
+      expect(content).toHaveProperty('historyResults', locked.historyResults);
       const events = await em.find(AuditEvent, {}, { orderBy: { seq: 'asc' } });
       expect(events.map((e) => e.action)).toEqual([
         'created',

@@ -176,4 +176,33 @@ describe('Response history, in the browser', () => {
       await section(page, 'Ground-motion record').getByText('tank-hall-pulse').waitFor();
     });
   });
+
+  it('student: reads the response history of the calc of record in the library, and lets the building go from any mode', async () => {
+    await asRole(browser, 'student', async (page) => {
+      await nav(page, 'Library');
+      await page
+        .getByRole('link', { name: /north-south/ })
+        .first()
+        .click();
+      await page.getByRole('tab', { name: 'Response history' }).click();
+      await section(page, 'Ground-motion record')
+        .getByText(/^Invented demo record/)
+        .waitFor();
+      const results = section(page, 'Response to the record');
+      await results
+        .getByTestId('history-scaling')
+        .getByText(/design spectrum's mean/)
+        .waitFor();
+      const peaks = 'Peak responses to the record, storey by storey';
+      expect(await page.getByRole('region', { name: peaks }).getByRole('row').count()).toBe(8);
+      // Nothing to save for a student, but the free vibration answers any start.
+      expect(await page.getByRole('button', { name: 'Keep with the calc' }).count()).toBe(0);
+      const free = section(page, 'Free vibration');
+      await free.getByText(/The calc keeps the free vibration from mode 1 shape, 0.05 m/).waitFor();
+      await free.getByLabel('Mode', { exact: true }).click();
+      await page.getByRole('option', { name: /^Mode 3 / }).click();
+      await free.getByText(/mode 3 alone/).waitFor();
+      await screenshot(page, 'response-history-student');
+    });
+  });
 });

@@ -1,6 +1,12 @@
 import type { EntityManager } from '@mikro-orm/sqlite';
-import type { CalculationInputs } from '@tiermode/shared-types';
+import {
+  defaultScalingRange,
+  type CalculationInputs,
+  type ResponseHistorySetup,
+} from '@tiermode/shared-types';
 import { analyse } from '../analysis/engine/analyse';
+import { calcResponseHistory } from '../analysis/engine/history/calc-history';
+import { demoRecord } from '../analysis/engine/history/record';
 import { generateSpectrum } from '../analysis/engine/spectrum-generators';
 import { appendAuditEvent } from '../audit/append-audit-event';
 import type { SigningKey } from '../signing/signing-key';
@@ -30,6 +36,25 @@ function housingBlock(): CalculationInputs {
     })),
     spectrum: asce7Spectrum({ sds: 1.0, sd1: 0.6, tl: 8, s1: 0.6 }),
     dampingRatio: 0.05,
+  };
+}
+
+/**
+ * The housing block under the invented demo record, scaled to the mean of its design spectrum
+ * over 0.2 T1 to 2 T1, and let go from its first mode with 50 mm at the roof: so that the
+ * library's calc of record shows a response history too.
+ */
+function housingHistory(): ResponseHistorySetup {
+  const firstPeriod = analyse(housingBlock()).modes[0].period;
+  const [from, to] = defaultScalingRange(firstPeriod);
+  return {
+    record: demoRecord(),
+    scaling: { method: 'spectrum', rule: 'mean', periodRange: [+from.toFixed(3), +to.toFixed(3)] },
+    freeVibration: {
+      start: { kind: 'mode', mode: 1, amplitude: 0.05 },
+      duration: 5,
+      timeStep: 0.01,
+    },
   };
 }
 
@@ -65,10 +90,12 @@ export async function seedDemoCalculations(em: EntityManager, key: SigningKey): 
     basis: Pick<Project, 'codeBasis' | 'structuralSystem'>,
     title: string,
     inputs: CalculationInputs,
+    history: ResponseHistorySetup | null = null,
   ) => {
     const project = em.create(Project, { name: projectName, site, ...basis, createdBy: designer });
     project.members.add(designer);
     const result = analyse(inputs);
+    const historyResults = history ? calcResponseHistory(inputs, history) : null;
     const created = at();
     const calc = em.create(Calculation, {
       project,
@@ -77,6 +104,8 @@ export async function seedDemoCalculations(em: EntityManager, key: SigningKey): 
       author: designer,
       inputsChangedAt: created,
       analysis: result,
+      history,
+      historyResults,
       engineVersion: result.engineVersion,
       analysedAt: at(),
     });
@@ -103,6 +132,7 @@ export async function seedDemoCalculations(em: EntityManager, key: SigningKey): 
     { codeBasis: 'EN1998-1', structuralSystem: 'Reinforced concrete walls' },
     'Lateral modal analysis, north-south',
     housingBlock(),
+    housingHistory(),
   );
   const lockedAt = at();
   const seal = housing.lock(

@@ -47,8 +47,7 @@ export function FreeVibrationPanel({
   modes: ModeResult[];
   units: UnitSystem;
   setup: FreeVibrationSetup;
-  /** Absent: read only. */
-  onChange?: (setup: FreeVibrationSetup) => void;
+  onChange: (setup: FreeVibrationSetup) => void;
 }) {
   const length = unitLabel(units, 'displacement');
   const initial = startDisplacements(
@@ -73,7 +72,7 @@ export function FreeVibrationPanel({
     (acc, s) => [...acc, (acc[acc.length - 1] ?? 0) + s.height],
     [],
   );
-  const change = (next: Partial<FreeVibrationSetup>) => onChange?.({ ...setup, ...next });
+  const change = (next: Partial<FreeVibrationSetup>) => onChange({ ...setup, ...next });
   const start = setup.start;
   const largest = Math.max(...(answer?.modes.map((m) => Math.abs(m.initialCoordinate)) ?? [0]));
   const moving = answer?.modes.filter((m) => Math.abs(m.initialCoordinate) > 1e-9 * largest) ?? [];
@@ -86,7 +85,6 @@ export function FreeVibrationPanel({
           select
           label="Start from"
           value={start.kind}
-          disabled={!onChange}
           onChange={(e) =>
             change({
               start:
@@ -106,7 +104,6 @@ export function FreeVibrationPanel({
               select
               label="Mode"
               value={start.mode}
-              disabled={!onChange}
               onChange={(e) => change({ start: { ...start, mode: Number(e.target.value) } })}
               sx={{ minWidth: 180 }}
             >
@@ -119,7 +116,6 @@ export function FreeVibrationPanel({
             <NumberField
               label={`Roof displacement at the start (${length})`}
               value={toDisplay(units, 'displacement', start.amplitude)}
-              disabled={!onChange}
               onChange={(shown) =>
                 change({
                   start: { ...start, amplitude: fromDisplay(units, 'displacement', shown) },
@@ -134,7 +130,6 @@ export function FreeVibrationPanel({
             helperText="Numbers separated by spaces or new lines, one per level"
             multiline
             minRows={2}
-            disabled={!onChange}
             defaultValue={start.displacements
               .map((u) => formatNumber(toDisplay(units, 'displacement', u), 6).replaceAll(',', ''))
               .join(' ')}
@@ -158,13 +153,11 @@ export function FreeVibrationPanel({
         <NumberField
           label="Duration (s)"
           value={setup.duration}
-          disabled={!onChange}
           onChange={(duration) => change({ duration })}
         />
         <NumberField
           label="Time step (s)"
           value={setup.timeStep}
-          disabled={!onChange}
           onChange={(timeStep) => change({ timeStep })}
         />
       </Stack>

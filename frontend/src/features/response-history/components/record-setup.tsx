@@ -163,82 +163,89 @@ export function RecordSetup({
           )}
         </Stack>
       ) : (
-        <Alert severity="info">No record yet: use the demo record or read a file.</Alert>
+        <Alert severity="info">
+          {readOnly
+            ? 'No record is kept with this calc.'
+            : 'No record yet: use the demo record or read a file.'}
+        </Alert>
       )}
 
-      <Box>
-        <Typography variant="h3" gutterBottom>
-          Scaling
-        </Typography>
-        <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 2 }}>
-          <TextField
-            select
-            label="Scale the record"
-            value={scaling.method === 'factor' ? 'factor' : scaling.rule}
-            disabled={readOnly}
-            onChange={(e) => {
-              const choice = e.target.value;
-              const range =
-                scaling.method === 'spectrum'
-                  ? scaling.periodRange
-                  : defaultScalingRange(fundamentalPeriod ?? 1);
-              onScaling(
-                choice === 'factor'
-                  ? { method: 'factor', factor: 1 }
-                  : {
-                      method: 'spectrum',
-                      rule: choice as 'mean' | 'not-below-90',
-                      periodRange: [+range[0].toPrecision(3), +range[1].toPrecision(3)],
-                    },
-              );
-            }}
-            sx={{ minWidth: 300 }}
-          >
-            <MenuItem value="factor">By a factor I give</MenuItem>
-            <MenuItem value="mean">To the design spectrum: its mean over a range</MenuItem>
-            <MenuItem value="not-below-90">
-              To the design spectrum: nowhere below 90 % over a range
-            </MenuItem>
-          </TextField>
-          {scaling.method === 'factor' && (
-            <NumberField
-              label="Factor"
-              value={scaling.factor}
+      {(record || !readOnly) && (
+        <Box>
+          <Typography variant="h3" gutterBottom>
+            Scaling
+          </Typography>
+          <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 2 }}>
+            <TextField
+              select
+              label="Scale the record"
+              value={scaling.method === 'factor' ? 'factor' : scaling.rule}
               disabled={readOnly}
-              onChange={(factor) => onScaling({ method: 'factor', factor })}
-            />
-          )}
-          {scaling.method === 'spectrum' && (
-            <>
+              onChange={(e) => {
+                const choice = e.target.value;
+                const range =
+                  scaling.method === 'spectrum'
+                    ? scaling.periodRange
+                    : defaultScalingRange(fundamentalPeriod ?? 1);
+                onScaling(
+                  choice === 'factor'
+                    ? { method: 'factor', factor: 1 }
+                    : {
+                        method: 'spectrum',
+                        rule: choice as 'mean' | 'not-below-90',
+                        periodRange: [+range[0].toPrecision(3), +range[1].toPrecision(3)],
+                      },
+                );
+              }}
+              sx={{ minWidth: 300 }}
+            >
+              <MenuItem value="factor">By a factor I give</MenuItem>
+              <MenuItem value="mean">To the design spectrum: its mean over a range</MenuItem>
+              <MenuItem value="not-below-90">
+                To the design spectrum: nowhere below 90 % over a range
+              </MenuItem>
+            </TextField>
+            {scaling.method === 'factor' && (
               <NumberField
-                key={`from-${scaling.periodRange[0]}`}
-                label="From period (s)"
-                value={scaling.periodRange[0]}
+                label="Factor"
+                value={scaling.factor}
                 disabled={readOnly}
-                onChange={(from) =>
-                  onScaling({ ...scaling, periodRange: [from, scaling.periodRange[1]] })
-                }
+                onChange={(factor) => onScaling({ method: 'factor', factor })}
               />
-              <NumberField
-                key={`to-${scaling.periodRange[1]}`}
-                label="To period (s)"
-                value={scaling.periodRange[1]}
-                disabled={readOnly}
-                onChange={(to) =>
-                  onScaling({ ...scaling, periodRange: [scaling.periodRange[0], to] })
-                }
-              />
-            </>
-          )}
-        </Stack>
-        <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
-          The usual range is 0.2 T1 to 2 T1 (EN 1998-1 3.2.3.1.2(4); ASCE 7-22 Chapter 16 sets its
-          own bounds from the first-mode periods and the 90 % mass period, from memory): it starts
-          there{fundamentalPeriod ? ` (T1 = ${formatNumber(fundamentalPeriod)} s)` : ''}. The rule
-          of &quot;nowhere below 90 %&quot; is the one EN 1998-1 3.2.3.1.2(4)c sets for the mean of
-          a set of records; the code&apos;s own rules on the number and choice of records govern.
-        </Typography>
-      </Box>
+            )}
+            {scaling.method === 'spectrum' && (
+              <>
+                <NumberField
+                  key={`from-${scaling.periodRange[0]}`}
+                  label="From period (s)"
+                  value={scaling.periodRange[0]}
+                  disabled={readOnly}
+                  onChange={(from) =>
+                    onScaling({ ...scaling, periodRange: [from, scaling.periodRange[1]] })
+                  }
+                />
+                <NumberField
+                  key={`to-${scaling.periodRange[1]}`}
+                  label="To period (s)"
+                  value={scaling.periodRange[1]}
+                  disabled={readOnly}
+                  onChange={(to) =>
+                    onScaling({ ...scaling, periodRange: [scaling.periodRange[0], to] })
+                  }
+                />
+              </>
+            )}
+          </Stack>
+          <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
+            The usual range is 0.2 T1 to 2 T1 (EN 1998-1 3.2.3.1.2(4); ASCE 7-22 Chapter 16 sets its
+            own bounds from the first-mode periods and the 90 % mass period, from memory): it starts
+            there{fundamentalPeriod ? ` (T1 = ${formatNumber(fundamentalPeriod)} s)` : ''}. The rule
+            of &quot;nowhere below 90 %&quot; is the one EN 1998-1 3.2.3.1.2(4)c sets for the mean
+            of a set of records; the code&apos;s own rules on the number and choice of records
+            govern.
+          </Typography>
+        </Box>
+      )}
     </Stack>
   );
 }

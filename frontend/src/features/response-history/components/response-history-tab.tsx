@@ -120,13 +120,20 @@ export function ResponseHistoryTab({
                 label="Keep this free vibration with the calc (its peaks go into the calc package)"
               />
             )}
+            {!editable && (
+              <Typography variant="body2" color="text.secondary">
+                {results?.freeVibration
+                  ? `The calc keeps the free vibration from ${results.freeVibration.startedFrom}; choose any other start to see it move (nothing is saved).`
+                  : 'Choose a start to see the building move (nothing is saved).'}
+              </Typography>
+            )}
             <FreeVibrationPanel
               storeys={calc.inputs.storeys}
               dampingRatio={calc.inputs.dampingRatio}
               modes={analysis.modes}
               units={units}
               setup={free}
-              onChange={editable ? setFree : undefined}
+              onChange={setFree}
             />
           </Stack>
         ) : (
