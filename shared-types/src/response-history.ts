@@ -3,8 +3,9 @@ import { STANDARD_GRAVITY } from './units';
 
 /**
  * Response history: the building's free vibration as a sum of damped modal responses, and its
- * linear response to a ground-motion record by modal superposition (method.md, "Response
- * history"). SI base units throughout (kg, N/m, m, s, N, N*m); record accelerations in the
+ * linear response to a ground-motion record by modal superposition (Chopra, Dynamics of
+ * Structures, chapters 10 and 13; the engine's history/ files give each step's source). SI base
+ * units throughout (kg, N/m, m, s, N, N*m); record accelerations in the
  * units they are given in; spectral accelerations in g.
  */
 

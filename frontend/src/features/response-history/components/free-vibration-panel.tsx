@@ -114,6 +114,7 @@ export function FreeVibrationPanel({
               ))}
             </TextField>
             <NumberField
+              key={`amplitude-${units}`}
               label={`Roof displacement at the start (${length})`}
               value={toDisplay(units, 'displacement', start.amplitude)}
               onChange={(shown) =>
@@ -126,6 +127,7 @@ export function FreeVibrationPanel({
         )}
         {start.kind === 'shape' && (
           <TextField
+            key={`shape-${units}`}
             label={`Displacement of each level, level 1 first (${length})`}
             helperText="Numbers separated by spaces or new lines, one per level"
             multiline
@@ -271,7 +273,7 @@ export function NumberField({
   return (
     <TextField
       label={label}
-      defaultValue={formatNumber(value, 6).replaceAll(',', '')}
+      defaultValue={Number.isFinite(value) ? formatNumber(value, 6).replaceAll(',', '') : ''}
       disabled={disabled}
       slotProps={{ htmlInput: { inputMode: 'decimal' } }}
       onChange={(e) => {
