@@ -136,7 +136,9 @@ describe('Exports', () => {
       .get(`/api/calculations/${calc.id}/results.csv?table=everything`)
       .set(as('designer'))
       .expect(400);
-    expect(bad.body.message).toEqual(['table must be one of modes, modal, combined, design']);
+    expect(bad.body.message).toEqual([
+      'table must be one of modes, modal, combined, design, history',
+    ]);
     const design = await http()
       .get(`/api/calculations/${calc.id}/results.csv?table=design`)
       .set(as('designer'))

@@ -305,6 +305,18 @@ describe("A calc's response history", () => {
     expect(results.freeVibration!.startedFrom).toContain('mode 1 shape, 0.05 m');
     expect(results.freeVibration!.initialDisplacements.at(-1)).toBeCloseTo(0.05, 12);
 
+    // The peaks as a CSV table, in US units (1 in = 0.0254 m), with their times.
+    const csv = await http()
+      .get(`/api/calculations/${calc.id}/results.csv?table=history&units=US`)
+      .set(as('designer'))
+      .expect(200);
+    const lines = csv.text.trim().split(/\r?\n/);
+    expect(lines[0]).toContain('Displacement (in),Displacement at (s)');
+    expect(lines).toHaveLength(1 + sampleInputs().storeys.length);
+    const roof = lines.at(-1)!.split(',');
+    expect(Number(roof[2])).toBeCloseTo(results.response.peaks.displacement.at(-1)! / 0.0254, 3);
+    expect(Number(roof[3])).toBeCloseTo(results.response.peakTimes.displacement.at(-1)!, 6);
+
     // The audit trail names what an edit of the setup changed.
     await http()
       .patch(`/api/calculations/${calc.id}`)

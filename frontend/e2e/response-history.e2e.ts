@@ -146,7 +146,10 @@ describe('Response history, in the browser', () => {
       await expect.poll(() => motionTime(page, 'Free vibration')).not.toMatch(/^t = 0 s/);
       await free.screenshot({ path: `${SCREENSHOTS}/response-history-free-vibration.png` });
 
-      // The calc package carries it.
+      // The peaks as CSV, in the units on screen, and the calc package carries it all.
+      const csv = (await download(page, 'Response history peaks (CSV)')).bytes.toString('utf8');
+      expect(csv.split(/\r?\n/)[0]).toContain('Displacement (mm),Displacement at (s)');
+      expect(Number(csv.trim().split(/\r?\n/).at(-1)!.split(',')[2])).toBeCloseTo(roof[1], 0);
       const pdf = (await download(page, 'Calc package (PDF)')).bytes;
       const file = join(tmpdir(), `response-history-${Date.now()}.pdf`);
       writeFileSync(file, pdf);

@@ -32,13 +32,14 @@ import { XLSX_TYPE } from '../imports/templates';
 import { ApiContract } from '../openapi/api-contract.decorator';
 import { Expensive } from '../rate-limit/expensive.decorator';
 
-const TABLES = ['modes', 'modal', 'combined', 'design'] as const;
+const TABLES = ['modes', 'modal', 'combined', 'design', 'history'] as const;
 type TableName = (typeof TABLES)[number];
 const TABLE_NAMES: Record<TableName, string> = {
   modes: 'Modes',
   modal: 'Modal responses',
   combined: 'Combined responses',
   design: 'Design storey values',
+  history: 'Response history peaks',
 };
 
 /** A file name from a title: letters, digits and dashes only. */
@@ -57,15 +58,20 @@ export class ExportsController {
     if (!calc.analysis) {
       throw new ConflictException('This calculation has not been analysed yet: nothing to export');
     }
-    // Checks older than the inputs are not exported as design values.
+    // Checks and a response history older than the inputs are not exported.
     const checks = calc.analysisStale ? null : calc.checks;
+    const history = calc.analysisStale ? null : calc.historyResults;
     const shown = exportUnits(units, calc);
-    return { calc, shown, tables: resultTables(calc.inputs, calc.analysis, shown, checks) };
+    return {
+      calc,
+      shown,
+      tables: resultTables(calc.inputs, calc.analysis, shown, checks, history),
+    };
   }
 
   @ApiContract({
     summary:
-      'One results table as CSV (table=modes, modal, combined or design; units=SI or US, default the calc’s own)',
+      'One results table as CSV (table=modes, modal, combined, design or history; units=SI or US, default the calc’s own)',
     file: 'text/csv',
   })
   @Get('calculations/:id/results.csv')
@@ -83,7 +89,9 @@ export class ExportsController {
     const chosen = tables.find((t) => t.name === TABLE_NAMES[table as TableName]);
     if (!chosen) {
       throw new ConflictException(
-        'This calculation has no current code-basis checks, so no design values: set a basis and analyse',
+        table === 'history'
+          ? 'This calculation has no current response history: keep a record with it and analyse'
+          : 'This calculation has no current code-basis checks, so no design values: set a basis and analyse',
       );
     }
     const csv = Papa.unparse({ fields: chosen.headers, data: safeRows(chosen) }) + '\r\n';

@@ -5,6 +5,7 @@ import {
   type CalculationInputs,
   type ChecksResponse,
   type Quantity,
+  type ResponseHistoryResult,
   type UnitSystem,
 } from '@tiermode/shared-types';
 
@@ -26,14 +27,16 @@ const labelOf = (inputs: CalculationInputs, i: number) => inputs.storeys[i]?.lab
 
 /**
  * The stored results as tables, in the chosen units: the modes, each mode's responses storey by
- * storey, the combined responses (SRSS, CQC, ABS) with the base shear and moment, and, where the
- * checks were made, the design storey values beside the elastic ones.
+ * storey, the combined responses (SRSS, CQC, ABS) with the base shear and moment, where the
+ * checks were made the design storey values beside the elastic ones, and where the calc has a
+ * response history its peaks storey by storey with their times.
  */
 export function resultTables(
   inputs: CalculationInputs,
   analysis: AnalysisResponse,
   units: UnitSystem,
   checks: ChecksResponse | null = null,
+  history: ResponseHistoryResult | null = null,
 ): Table[] {
   const show = (quantity: Quantity, si: number) => sig(toDisplay(units, quantity, si));
   const u = (quantity: Quantity) => unitLabel(units, quantity);
@@ -154,6 +157,39 @@ export function resultTables(
           show(quantity, elastic[key][i]),
           show(quantity, design[key][i]),
         ]),
+      ]),
+    });
+  }
+  if (history) {
+    const { peaks, peakTimes: at } = history.response;
+    const quantities = [
+      ['Displacement', 'displacement', 'displacement'],
+      ['Drift', 'displacement', 'drift'],
+      ['Floor force', 'force', 'floorForce'],
+      ['Storey shear', 'force', 'shear'],
+      ['Overturning moment', 'moment', 'overturningMoment'],
+    ] as const;
+    tables.push({
+      name: 'Response history peaks',
+      headers: [
+        'Storey',
+        'Label',
+        ...quantities.flatMap(([title, quantity]) => [
+          `${title} (${u(quantity)})`,
+          `${title} at (s)`,
+        ]),
+        'Drift ratio',
+        `Record scale factor`,
+      ],
+      rows: inputs.storeys.map((_, i) => [
+        i + 1,
+        labelOf(inputs, i),
+        ...quantities.flatMap(([, quantity, key]) => [
+          show(quantity, peaks[key][i]),
+          sig(at[key][i]),
+        ]),
+        sig(peaks.driftRatio[i]),
+        sig(history.scaling.factor),
       ]),
     });
   }

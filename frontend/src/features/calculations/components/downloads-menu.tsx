@@ -21,6 +21,7 @@ export function DownloadsMenu({ calc, units }: { calc: CalculationDto; units: Un
   const [failure, setFailure] = useState<string | null>(null);
   const analysed = calc.analysis !== null;
   const designValues = analysed && calc.checks?.design !== undefined && !calc.analysisStale;
+  const historyPeaks = analysed && calc.historyResults !== null && !calc.analysisStale;
   const items: {
     label: string;
     path: string;
@@ -59,6 +60,13 @@ export function DownloadsMenu({ calc, units }: { calc: CalculationDto; units: Un
       file: 'design.csv',
       needsResults: true,
       hidden: !designValues,
+    },
+    {
+      label: 'Response history peaks (CSV)',
+      path: 'results.csv?table=history',
+      file: 'history.csv',
+      needsResults: true,
+      hidden: !historyPeaks,
     },
     { label: 'Whole calc (JSON)', path: 'export.json', file: 'calc.json', needsResults: false },
   ];
