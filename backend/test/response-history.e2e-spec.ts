@@ -332,6 +332,16 @@ describe("A calc's response history", () => {
     const edits = events.filter((e) => e.action === 'edited').map((e) => e.detail?.changes);
     expect(edits).toContainEqual(['response history']);
     expect(edits).toContainEqual(['record scaling']);
+    // The calc package then says the stored response history is older than the record.
+    const pdf = await http()
+      .get(`/api/calculations/${calc.id}/report.pdf`)
+      .set(as('designer'))
+      .buffer(true)
+      .parse(binaryBody)
+      .expect(200);
+    const { text } = await pdfText(pdf.body as Buffer);
+    expect(text).toContain('older than the inputs or the record');
+    expect(text).not.toContain('Peak responses to the record');
   });
 
   it.each([

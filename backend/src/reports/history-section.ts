@@ -49,10 +49,25 @@ export function historySection(doc: Doc, calc: CalculationDto, units: UnitSystem
       'Samples',
       `${steps} at ${record.timeStep} s (${time((steps - 1) * record.timeStep)} s), in ${record.units}`,
     ],
-    ['Scaling', results ? results.scaling.explanation : 'Not analysed'],
+    [
+      'Scaling',
+      !results
+        ? 'Not analysed'
+        : calc.analysisStale
+          ? 'Found again by the next analysis'
+          : results.scaling.explanation,
+    ],
   ]);
   if (!results) {
     write(doc, 'The response history has not been made: analyse the calc.');
+    return;
+  }
+  if (calc.analysisStale) {
+    write(
+      doc,
+      'The stored response history is older than the inputs or the record; analyse again before relying on it.',
+      { width: 495 },
+    );
     return;
   }
   const response = results.response;
