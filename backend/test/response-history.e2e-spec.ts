@@ -1,6 +1,7 @@
 import { MikroORM } from '@mikro-orm/sqlite';
 import type {
   AuditEventDto,
+  CalculationChanges,
   CalculationDto,
   DemoRecordResponse,
   FreeVibrationResponse,
@@ -423,6 +424,44 @@ describe("A calc's response history", () => {
     expect(text).toContain('Invented demo record');
     expect(text).toContain('Peak responses to the record');
     expect(text).toContain('Free vibration');
+
+    // Returned with a comment, then the scaling changed: the reviewer's "What changed" says so.
+    const draft = await withHistory('History changes for the reviewer');
+    await http().post(`/api/calculations/${draft.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${draft.id}/submit`).set(as('designer')).expect(200);
+    await http()
+      .post(`/api/calculations/${draft.id}/return`)
+      .set(as('reviewer'))
+      .send({ comment: 'Scale over a wider range.' })
+      .expect(200);
+    const returned = (
+      await http().get(`/api/calculations/${draft.id}`).set(as('designer')).expect(200)
+    ).body as CalculationDto;
+    await http()
+      .patch(`/api/calculations/${draft.id}`)
+      .set(as('designer'))
+      .send({
+        version: returned.version,
+        history: {
+          ...returned.history,
+          scaling: { method: 'spectrum', rule: 'mean', periodRange: [0.1, 3] },
+        },
+      })
+      .expect(200);
+    const changes = (
+      await http()
+        .get(`/api/calculations/${draft.id}/changes?since=submission`)
+        .set(as('reviewer'))
+        .expect(200)
+    ).body as CalculationChanges;
+    expect(changes.unchanged).toBe(false);
+    expect(changes.history).toEqual([
+      {
+        field: 'record scaling',
+        old: 'design spectrum mean over 0.1 to 1.5 s',
+        new: 'design spectrum mean over 0.1 to 3 s',
+      },
+    ]);
 
     const next = (
       await http().post(`/api/calculations/${calc.id}/revise`).set(as('designer')).expect(201)

@@ -1,5 +1,6 @@
 import type { CalculationInputs } from './calculations';
 import type { CodeBasisParameters } from './checks';
+import type { RecordScaling, ResponseHistorySetup } from './response-history';
 
 /** One value that changed: what it is, before and after (SI base units, as stored). */
 export interface FieldChange {
@@ -35,14 +36,69 @@ export interface CalculationChanges {
   basis: FieldChange[];
   /** `dampingRatio`, `modeCount`, `targetMassRatio`. */
   settings: FieldChange[];
+  /**
+   * The response history, in words: `response history` when one side has none, else
+   * `ground-motion record`, `record scaling`, `free vibration`.
+   */
+  history: FieldChange[];
   /** True when nothing above changed. */
   unchanged: boolean;
 }
 
-/** What is compared: a calc's inputs and basis. */
+/** What is compared: a calc's inputs and basis, and its response history setup. */
 export interface ComparedInputs {
   inputs: CalculationInputs;
   basis: CodeBasisParameters | null;
+  /** Absent: not compared (e.g. a submission returned before records were kept with calcs). */
+  history?: ResponseHistorySetup | null;
+}
+
+const describeScaling = (scaling: RecordScaling) =>
+  scaling.method === 'factor'
+    ? `x ${scaling.factor}`
+    : `${scaling.rule === 'mean' ? 'design spectrum mean' : 'not below 90 % of the design spectrum'} over ${scaling.periodRange[0]} to ${scaling.periodRange[1]} s`;
+
+/** A response history setup's parts in words, for the changes table. */
+function historyParts(setup: ResponseHistorySetup) {
+  const { record } = setup;
+  const start = setup.freeVibration?.start;
+  return {
+    record: `${record.name} (${record.accelerations.length} samples at ${record.timeStep} s, ${record.units})`,
+    scaling: describeScaling(setup.scaling),
+    freeVibration: !setup.freeVibration
+      ? 'none'
+      : `${start?.kind === 'mode' ? `mode ${start.mode}, ${start.amplitude} m` : 'a given shape'}, ${setup.freeVibration.duration} s at ${setup.freeVibration.timeStep} s`,
+  };
+}
+
+function historyFieldChanges(
+  before: ResponseHistorySetup | null | undefined,
+  after: ResponseHistorySetup | null | undefined,
+): FieldChange[] {
+  if (before === undefined || after === undefined) return [];
+  if (!before || !after) {
+    if (!before && !after) return [];
+    return [
+      {
+        field: 'response history',
+        old: before ? historyParts(before).record : null,
+        new: after ? historyParts(after).record : null,
+      },
+    ];
+  }
+  const a = historyParts(before);
+  const b = historyParts(after);
+  return [
+    ...(same(before.record, after.record)
+      ? []
+      : [{ field: 'ground-motion record', old: a.record, new: b.record }]),
+    ...(same(before.scaling, after.scaling)
+      ? []
+      : [{ field: 'record scaling', old: a.scaling, new: b.scaling }]),
+    ...(same(before.freeVibration, after.freeVibration)
+      ? []
+      : [{ field: 'free vibration', old: a.freeVibration, new: b.freeVibration }]),
+  ];
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
@@ -146,12 +202,15 @@ export function inputChanges(
     b as unknown as Record<string, unknown>,
     ['dampingRatio', 'modeCount', 'targetMassRatio'],
   );
+  const history = historyFieldChanges(before.history, after.history);
   return {
     storeys,
     spectrum,
     basis,
     settings,
-    unchanged: storeys.length + spectrum.length + basis.length + settings.length === 0,
+    history,
+    unchanged:
+      storeys.length + spectrum.length + basis.length + settings.length + history.length === 0,
   };
 }
 
@@ -171,5 +230,6 @@ export function changeNames(changes: Omit<CalculationChanges, 'since' | 'baselin
   }
   for (const f of changes.basis) names.push(f.field === 'basis' ? 'basis' : `basis ${f.field}`);
   for (const f of changes.settings) names.push(f.field === 'dampingRatio' ? 'damping' : f.field);
+  for (const f of changes.history) names.push(f.field);
   return names;
 }

@@ -407,22 +407,3 @@ export function spectrumScaleFactor(
   }
   return Math.max(...designSa.map((value, i) => (0.9 * value) / recordSa[i]));
 }
-
-/**
- * What changed between two response history setups, in a few words each ("ground-motion record",
- * "record scaling", "free vibration"), for the audit trail; "response history" when one is
- * added or removed.
- */
-export function historyChanges(
-  before: ResponseHistorySetup | null,
-  after: ResponseHistorySetup | null,
-): string[] {
-  if (!before && !after) return [];
-  if (!before || !after) return ['response history'];
-  const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
-  return [
-    ...(same(before.record, after.record) ? [] : ['ground-motion record']),
-    ...(same(before.scaling, after.scaling) ? [] : ['record scaling']),
-    ...(same(before.freeVibration, after.freeVibration) ? [] : ['free vibration']),
-  ];
-}

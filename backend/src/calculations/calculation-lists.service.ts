@@ -11,7 +11,15 @@ import { calculationSubject, isAnalysisStale } from './calculation.mapper';
 import type { ListCalculationsDto } from './dto/list-calculations.dto';
 
 const POPULATE = ['project.members', 'author', 'reviewer'] as const;
-const LARGE_COLUMNS = ['analysis', 'checks', 'returnedInputs', 'returnedBasis'] as const;
+const LARGE_COLUMNS = [
+  'analysis',
+  'checks',
+  'returnedInputs',
+  'returnedBasis',
+  'returnedHistory',
+  'history',
+  'historyResults',
+] as const;
 
 /** The lists of calcs: the firm-wide list behind the dashboard and project pages, and the library. */
 @Injectable()

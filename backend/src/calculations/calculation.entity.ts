@@ -48,6 +48,7 @@ export class Calculation {
     | 'submittedAt'
     | 'returnedInputs'
     | 'returnedBasis'
+    | 'returnedHistory'
     | 'returnedAt'
     | 'lockedAt'
     | 'seal'
@@ -128,6 +129,9 @@ export class Calculation {
 
   @Property({ type: 'json', nullable: true })
   returnedBasis: CodeBasisParameters | null = null;
+
+  @Property({ type: 'json', nullable: true })
+  returnedHistory: ResponseHistorySetup | null = null;
 
   @Property({ type: DateTimeType, nullable: true })
   returnedAt: Date | null = null;
@@ -215,6 +219,7 @@ export class Calculation {
     this.returnedAt = at;
     this.returnedInputs = structuredClone(this.inputs);
     this.returnedBasis = this.basis ? structuredClone(this.basis) : null;
+    this.returnedHistory = this.history ? structuredClone(this.history) : null;
     this.reviewer = reviewer;
   }
 

@@ -17,7 +17,6 @@ import { isLicensed } from '../authorization/licence';
 import type { AppEnvironment } from '../config/environment';
 import {
   changeNames,
-  historyChanges,
   inputChanges,
   type AnalysisRequest,
   type AnalysisResponse,
@@ -235,8 +234,9 @@ export class CalculationsService {
         // What changed, in a few words each: "storey 2 mass", "spectrum points", "basis sds".
         changes: [
           ...(before.title !== calc.title ? ['title'] : []),
-          ...changeNames(inputChanges(before, { inputs: calc.inputs, basis: calc.basis })),
-          ...historyChanges(before.history, calc.history),
+          ...changeNames(
+            inputChanges(before, { inputs: calc.inputs, basis: calc.basis, history: calc.history }),
+          ),
         ],
       },
     });
@@ -502,7 +502,7 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    const now = { inputs: calc.inputs, basis: calc.basis };
+    const now = { inputs: calc.inputs, basis: calc.basis, history: calc.history };
     if (since === 'submission') {
       // The submission the reviewer returned; a first submission has none yet.
       if (!calc.returnedInputs) {
@@ -521,7 +521,10 @@ export class CalculationsService {
           revision: calc.revision,
           at: calc.returnedAt?.toISOString() ?? null,
         },
-        ...inputChanges({ inputs: calc.returnedInputs, basis: calc.returnedBasis }, now),
+        ...inputChanges(
+          { inputs: calc.returnedInputs, basis: calc.returnedBasis, history: calc.returnedHistory },
+          now,
+        ),
       };
     }
     const previous = calc.previousRevision;
@@ -537,7 +540,10 @@ export class CalculationsService {
         revision: previous.revision,
         at: previous.lockedAt?.toISOString() ?? null,
       },
-      ...inputChanges({ inputs: previous.inputs, basis: previous.basis }, now),
+      ...inputChanges(
+        { inputs: previous.inputs, basis: previous.basis, history: previous.history },
+        now,
+      ),
     };
   }
 

@@ -77,7 +77,7 @@ function FieldList({ title, changes }: { title: string; changes: FieldChange[] }
 /**
  * What changed since the submission the reviewer returned, or since the revision it came from: the
  * storey table with each changed cell marked (old → new), added and removed storeys, and the
- * spectrum, basis and settings that changed.
+ * spectrum, basis, settings and response history that changed.
  */
 export function ChangesPanel({ calc, units }: { calc: CalculationDto; units: UnitSystem }) {
   const options: { value: Since; label: string }[] = [
@@ -222,6 +222,7 @@ function ChangesView({
       <FieldList title="Design spectrum" changes={changes.spectrum} />
       <FieldList title="Code basis" changes={changes.basis} />
       <FieldList title="Damping and modes" changes={changes.settings} />
+      <FieldList title="Response history" changes={changes.history} />
     </>
   );
 }
