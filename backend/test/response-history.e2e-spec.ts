@@ -289,6 +289,25 @@ describe("A calc's response history", () => {
     return res.body as CalculationDto;
   }
 
+  /** A calc with the response history above, analysed and submitted for review. */
+  async function submittedWithHistory(title: string) {
+    const calc = await withHistory(title);
+    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
+    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    return calc;
+  }
+
+  /** The calc package's text. */
+  async function packageText(id: string, role: 'designer' | 'student') {
+    const pdf = await http()
+      .get(`/api/calculations/${id}/report.pdf`)
+      .set(as(role))
+      .buffer(true)
+      .parse(binaryBody)
+      .expect(200);
+    return (await pdfText(pdf.body as Buffer)).text;
+  }
+
   it('is stored as an input, made by analyse, and shown with the calc', async () => {
     const calc = await withHistory('History stored');
     expect(calc.history!.record.origin).toBe('demo');
@@ -334,13 +353,7 @@ describe("A calc's response history", () => {
     expect(edits).toContainEqual(['response history']);
     expect(edits).toContainEqual(['record scaling']);
     // The calc package then says the stored response history is older than the record.
-    const pdf = await http()
-      .get(`/api/calculations/${calc.id}/report.pdf`)
-      .set(as('designer'))
-      .buffer(true)
-      .parse(binaryBody)
-      .expect(200);
-    const { text } = await pdfText(pdf.body as Buffer);
+    const text = await packageText(calc.id, 'designer');
     expect(text).toContain('older than the inputs or the record');
     expect(text).not.toContain('Peak responses to the record');
   });
@@ -388,9 +401,7 @@ describe("A calc's response history", () => {
   });
 
   it('is sealed by the lock, goes into the calc package, and carries over to the next revision', async () => {
-    const calc = await withHistory('History sealed');
-    await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
-    await http().post(`/api/calculations/${calc.id}/submit`).set(as('designer')).expect(200);
+    const calc = await submittedWithHistory('History sealed');
     await http()
       .post(`/api/calculations/${calc.id}/lock`)
       .set(as('reviewer'))
@@ -413,22 +424,21 @@ describe("A calc's response history", () => {
     ).body as SealCheckResponse;
     expect(broken).toMatchObject({ valid: false, hashValid: false });
 
-    const pdf = await http()
-      .get(`/api/calculations/${calc.id}/report.pdf`)
-      .set(as('student'))
-      .buffer(true)
-      .parse(binaryBody)
-      .expect(200);
-    const { text } = await pdfText(pdf.body as Buffer);
+    const text = await packageText(calc.id, 'student');
     expect(text).toContain('Response history');
     expect(text).toContain('Invented demo record');
     expect(text).toContain('Peak responses to the record');
     expect(text).toContain('Free vibration');
 
-    // Returned with a comment, then the scaling changed: the reviewer's "What changed" says so.
-    const draft = await withHistory('History changes for the reviewer');
-    await http().post(`/api/calculations/${draft.id}/analyse`).set(as('designer')).expect(200);
-    await http().post(`/api/calculations/${draft.id}/submit`).set(as('designer')).expect(200);
+    const next = (
+      await http().post(`/api/calculations/${calc.id}/revise`).set(as('designer')).expect(201)
+    ).body as CalculationDto;
+    expect(next.history).toEqual(calc.history);
+    expect(next.historyResults).toBeNull();
+  });
+
+  it('shows the reviewer what changed in it since the submission returned', async () => {
+    const draft = await submittedWithHistory('History changes for the reviewer');
     await http()
       .post(`/api/calculations/${draft.id}/return`)
       .set(as('reviewer'))
@@ -462,12 +472,6 @@ describe("A calc's response history", () => {
         new: 'design spectrum mean over 0.1 to 3 s',
       },
     ]);
-
-    const next = (
-      await http().post(`/api/calculations/${calc.id}/revise`).set(as('designer')).expect(201)
-    ).body as CalculationDto;
-    expect(next.history).toEqual(calc.history);
-    expect(next.historyResults).toBeNull();
   });
 
   it('goes out with the whole calc (JSON) and comes back into the imported draft', async () => {
