@@ -56,6 +56,8 @@ export const HISTORY_LIMITS = {
   displayPoints: 2_000,
   maxAnimationFrames: 2_000,
   maxScale: 100,
+  /** g: no ground shakes near this; a larger sample is a units slip (cm/s^2 read as g). */
+  maxAcceleration: 100,
 } as const;
 
 /** `POST /api/free-vibration`. */

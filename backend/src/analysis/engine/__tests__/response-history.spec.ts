@@ -418,6 +418,13 @@ describe('response history of a building', () => {
     expect(() =>
       responseHistory({ ...base, record: { ...record, accelerations: [0, 1, Number.NaN] } }),
     ).toThrow('record.accelerations[2] (sample 3, t = 0.02 s) must be a finite number (g)');
+    // 500 cm/s^2 read as g would be 500 g: a units slip, named (100 g bound: common practice,
+    // no recorded ground motion comes near it).
+    expect(() =>
+      responseHistory({ ...base, record: { ...record, accelerations: [0, 500, 0] } }),
+    ).toThrow(
+      "record.accelerations[1] (sample 2, t = 0.01 s) is 500 g, more than 100 g: check the record's units (g chosen)",
+    );
     expect(() => responseHistory({ ...base, record: { ...record, timeStep: 0 } })).toThrow(
       'record.timeStep must be from 0.0001 to 0.1 s',
     );

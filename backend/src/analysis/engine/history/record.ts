@@ -40,11 +40,16 @@ export function assertRecord(record: GroundMotionRecord, path = 'record'): void 
       `${path}.accelerations must have ${HISTORY_LIMITS.minRecordSteps} to ${HISTORY_LIMITS.maxRecordSteps} values (got ${n})`,
     );
   }
+  const inG = ACCELERATION_UNIT_FACTORS[units] / STANDARD_GRAVITY;
   for (let k = 0; k < n; k++) {
     const a: unknown = accelerations[k];
+    const where = `${path}.accelerations[${k}] (sample ${k + 1}, t = ${+(k * timeStep).toPrecision(6)} s)`;
     if (typeof a !== 'number' || !Number.isFinite(a)) {
-      throw new TypeError(
-        `${path}.accelerations[${k}] (sample ${k + 1}, t = ${+(k * timeStep).toPrecision(6)} s) must be a finite number (${units})`,
+      throw new TypeError(`${where} must be a finite number (${units})`);
+    }
+    if (Math.abs(a) * inG > HISTORY_LIMITS.maxAcceleration) {
+      throw new RangeError(
+        `${where} is ${+(Math.abs(a) * inG).toPrecision(3)} g, more than ${HISTORY_LIMITS.maxAcceleration} g: check the record's units (${units} chosen)`,
       );
     }
   }
