@@ -259,6 +259,11 @@ describe('Records: the demo and uploads', () => {
     expect((noStep.body.message as string[])[0]).toContain(
       'timeStep: One column of accelerations needs its time step',
     );
+    // Gal read as g: refused, naming the row.
+    const slip = await upload('0\n250\n0\n', { units: 'g', timeStep: '0.01' }).expect(400);
+    expect((slip.body.message as string[])[0]).toBe(
+      'Row 2, acceleration: 250 g is 250 g, more than 100 g: are the units right?',
+    );
     const noUnits = await upload('0\n0.1\n0\n', { timeStep: '0.01' }).expect(400);
     expect(noUnits.body.message).toEqual([
       "units must be one of g, m/s2, cm/s2 (the record's accelerations)",

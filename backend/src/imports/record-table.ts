@@ -1,5 +1,7 @@
 import {
+  ACCELERATION_UNIT_FACTORS,
   HISTORY_LIMITS,
+  STANDARD_GRAVITY,
   numberUnder,
   type AccelerationUnits,
   type DecimalMark,
@@ -54,6 +56,7 @@ export function parseRecordTable(
     );
   }
   const twoColumns = width === 2;
+  const inG = ACCELERATION_UNIT_FACTORS[options.units] / STANDARD_GRAVITY;
   const times: number[] = [];
   const accelerations: number[] = [];
   for (const r of body) {
@@ -80,6 +83,14 @@ export function parseRecordTable(
     };
     const t = twoColumns ? read(row[0], TIME) : 0;
     const a = read(row[twoColumns ? 1 : 0], ACCELERATION);
+    if (a !== null && Math.abs(a) * inG > HISTORY_LIMITS.maxAcceleration) {
+      errors.push({
+        row: r + 1,
+        column: ACCELERATION,
+        message: `${a} ${options.units} is ${+(Math.abs(a) * inG).toPrecision(3)} g, more than ${HISTORY_LIMITS.maxAcceleration} g: are the units right?`,
+      });
+      continue;
+    }
     if (t !== null && a !== null) {
       times.push(t);
       accelerations.push(a);
