@@ -10,7 +10,8 @@ export default defineConfig({
     // `npm run dev`: the API runs on its own port under watch.
     proxy: { '/api': { target: `http://127.0.0.1:${process.env.PORT ?? 3000}` } },
   },
-  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 2000 },
+  // Source maps for debugging here, not referenced by the scripts; the server never serves them.
+  build: { outDir: 'dist', sourcemap: 'hidden', chunkSizeWarningLimit: 2000 },
   test: {
     environment: 'jsdom',
     globals: true,

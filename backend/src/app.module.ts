@@ -24,9 +24,31 @@ import { SigningModule } from './signing/signing.module';
 import { UsersModule } from './users/users.module';
 import { VerificationModule } from './verification/verification.module';
 
+/**
+ * Vite names every built asset by its content's hash (assets/index-3f9a1c.js): such a file never
+ * changes, so browsers may keep it for a year. Anything else (index.html) is checked each time.
+ */
+function cacheHeaders(
+  response: { setHeader: (name: string, value: string) => void },
+  path: string,
+) {
+  response.setHeader(
+    'Cache-Control',
+    /[\\/]assets[\\/][^\\/]+-[A-Za-z0-9_-]{8,}\.[a-z0-9]+$/.test(path)
+      ? 'public, max-age=31536000, immutable'
+      : 'no-cache',
+  );
+}
+
 // The built web app, when there is one; every non-API path gets index.html (client routing).
 const webApp = existsSync(join(FRONTEND_DIST, 'index.html'))
-  ? [ServeStaticModule.forRoot({ rootPath: FRONTEND_DIST, exclude: ['/api{/*path}'] })]
+  ? [
+      ServeStaticModule.forRoot({
+        rootPath: FRONTEND_DIST,
+        exclude: ['/api{/*path}'],
+        serveStaticOptions: { setHeaders: cacheHeaders },
+      }),
+    ]
   : [];
 
 @Module({

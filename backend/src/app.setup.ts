@@ -1,6 +1,8 @@
 import { BadRequestException, ValidationPipe } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
+import compression from 'compression';
 import helmet from 'helmet';
+import { constants as zlibConstants } from 'node:zlib';
 import type { NextFunction, Request, Response } from 'express';
 import { ApiExceptionFilter, errorBody } from './common/filters/api-exception.filter';
 import { RefusedFieldError } from './common/validation/refused-field-error';
@@ -11,6 +13,16 @@ import { setupOpenApi } from './openapi/openapi';
 /** What main.ts and the e2e tests both apply to the app, so tests see what users get. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
+  // Answers and static files compressed when the client asks: brotli (at quality 4, which is
+  // fast enough for answers made per request) or gzip. Registered first, so it wraps them all.
+  app.use(
+    compression({
+      brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } },
+      threshold: 1024,
+    }),
+  );
+  // Source maps are built for debugging here and never served.
+  app.use(refuseSourceMaps);
   // Keys that could reach an object's prototype are refused while the JSON is parsed. Both
   // parsers are set here, so Nest adds none of its own after the error handler below.
   app.useBodyParser('json', { reviver: refusePrototypeKeys, limit: JSON_BODY_LIMIT });
@@ -58,6 +70,14 @@ const PROTOTYPE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 function refusePrototypeKeys(key: string, value: unknown): unknown {
   if (PROTOTYPE_KEYS.has(key)) throw new RefusedFieldError(key);
   return value;
+}
+
+function refuseSourceMaps(request: Request, response: Response, next: NextFunction): void {
+  if (request.path.endsWith('.map') && !request.path.startsWith('/api/')) {
+    response.status(404).json({ statusCode: 404, message: ['Not found'], error: 'Not Found' });
+    return;
+  }
+  next();
 }
 
 function answerBodyParserErrors(
