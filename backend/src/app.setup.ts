@@ -23,6 +23,9 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   );
   // Source maps are built for debugging here and never served.
   app.use(refuseSourceMaps);
+  // No ETag on API answers: hashing a large analysis answer for it cost more than the answer was
+  // worth, and every answer is made fresh. Static files keep theirs (serve-static's own).
+  app.set('etag', false);
   // Keys that could reach an object's prototype are refused while the JSON is parsed. Both
   // parsers are set here, so Nest adds none of its own after the error handler below.
   app.useBodyParser('json', { reviver: refusePrototypeKeys, limit: JSON_BODY_LIMIT });

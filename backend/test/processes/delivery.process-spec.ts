@@ -79,6 +79,13 @@ describe('Delivery of the web app and the API', () => {
     expect(plain.body.toString('utf8')).not.toContain('sourceMappingURL');
   });
 
+  it("puts no ETag on API answers, and keeps the static files' own", async () => {
+    const health = await raw(`${server.url}/api/health`, {});
+    expect(health.headers.etag).toBeUndefined();
+    const asset = await raw(`${server.url}/assets/${script}`, {});
+    expect(asset.headers.etag).toBeDefined();
+  });
+
   it('compresses API answers too', async () => {
     const body = JSON.stringify({
       storeys: Array.from({ length: 20 }, () => ({ mass: 3e5, stiffness: 4e8, height: 3.5 })),
@@ -91,7 +98,11 @@ describe('Delivery of the web app and the API', () => {
       },
       dampingRatio: 0.05,
     });
-    const res = await new Promise<{ encoding: string | undefined; body: Buffer }>((done, fail) => {
+    const res = await new Promise<{
+      encoding: string | undefined;
+      etag: string | undefined;
+      body: Buffer;
+    }>((done, fail) => {
       const url = new URL(`${server.url}/api/analysis`);
       const req = request(
         url,
@@ -107,7 +118,11 @@ describe('Delivery of the web app and the API', () => {
           const chunks: Buffer[] = [];
           r.on('data', (c: Buffer) => chunks.push(c));
           r.on('end', () =>
-            done({ encoding: r.headers['content-encoding'], body: Buffer.concat(chunks) }),
+            done({
+              encoding: r.headers['content-encoding'],
+              etag: r.headers.etag,
+              body: Buffer.concat(chunks),
+            }),
           );
         },
       );
@@ -115,6 +130,7 @@ describe('Delivery of the web app and the API', () => {
       req.end(body);
     });
     expect(res.encoding).toBe('gzip');
+    expect(res.etag).toBeUndefined();
     const answer = JSON.parse(gunzipSync(res.body).toString('utf8')) as { modes: unknown[] };
     expect(answer.modes).toHaveLength(20);
   });
