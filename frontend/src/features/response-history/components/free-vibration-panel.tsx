@@ -22,7 +22,7 @@ import { errorMessages } from '@/lib/api-client';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { formatNumber, fromDisplay, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 import { useFreeVibration } from '../api/response-history';
-import { startDisplacements } from '../model/history-model';
+import { startDisplacements, bareStoreys, elevationsOf } from '../model/history-model';
 import { BuildingMotion } from './building-motion';
 import { useTimeline } from '../model/use-timeline';
 import { TimeChart } from './time-chart';
@@ -57,7 +57,7 @@ export function FreeVibrationPanel({
   const request: FreeVibrationRequest | null =
     initial && initial.length === storeys.length
       ? {
-          storeys: storeys.map(({ mass, stiffness, height }) => ({ mass, stiffness, height })),
+          storeys: bareStoreys(storeys),
           dampingRatio,
           initialDisplacements: initial,
           duration: setup.duration,
@@ -68,10 +68,7 @@ export function FreeVibrationPanel({
   const run = useFreeVibration(settled);
   const answer = run.data;
   const timeline = useTimeline(answer?.times ?? []);
-  const elevations = storeys.reduce<number[]>(
-    (acc, s) => [...acc, (acc[acc.length - 1] ?? 0) + s.height],
-    [],
-  );
+  const elevations = elevationsOf(storeys);
   const change = (next: Partial<FreeVibrationSetup>) => onChange({ ...setup, ...next });
   const start = setup.start;
   const largest = Math.max(...(answer?.modes.map((m) => Math.abs(m.initialCoordinate)) ?? [0]));

@@ -21,6 +21,7 @@ import { errorMessages } from '@/lib/api-client';
 import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem } from '@/lib/units';
 import { useResponseHistory } from '../api/response-history';
 import { BuildingMotion } from './building-motion';
+import { bareStoreys, elevationsOf } from '../model/history-model';
 import { useTimeline } from '../model/use-timeline';
 import { TimeChart } from './time-chart';
 
@@ -50,7 +51,7 @@ export function HistoryResults({
   const response = results.response;
   const { record } = setup;
   const frames = useResponseHistory({
-    storeys: storeys.map(({ mass, stiffness, height }) => ({ mass, stiffness, height })),
+    storeys: bareStoreys(storeys),
     dampingRatio,
     record: { timeStep: record.timeStep, accelerations: record.accelerations, units: record.units },
     scale: results.scaling.factor,
@@ -58,10 +59,7 @@ export function HistoryResults({
   });
   const animation = frames.data?.animation;
   const timeline = useTimeline(animation?.times ?? []);
-  const elevations = storeys.reduce<number[]>(
-    (acc, s) => [...acc, (acc[acc.length - 1] ?? 0) + s.height],
-    [],
-  );
+  const elevations = elevationsOf(storeys);
   const show = (quantity: Quantity, si: number) => formatNumber(toDisplay(units, quantity, si));
   const u = (quantity: Quantity) => unitLabel(units, quantity);
   const roof = response.histories.roofDisplacement;

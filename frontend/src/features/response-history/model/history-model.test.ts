@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  elevationsOf,
   frameAt,
   largestShift,
   levelsAt,
@@ -46,5 +47,10 @@ describe('response history model', () => {
     ];
     expect(largestShift(u)).toBe(0.3);
     expect(levelsAt(u, 2)).toEqual([-0.3, 0.25]);
+  });
+
+  it('stacks the storey heights into level elevations', () => {
+    const storeys = [4, 3.5, 3.5].map((height) => ({ mass: 1, stiffness: 1, height }));
+    expect(elevationsOf(storeys)).toEqual([4, 7.5, 11]);
   });
 });

@@ -5,6 +5,7 @@ import {
   type FreeVibrationSetup,
   type FreeVibrationStart,
   type GroundMotionRecord,
+  type StoreyInput,
 } from '@tiermode/shared-types';
 
 /** The record's accelerations in g (for plotting beside spectra in g). */
@@ -66,3 +67,13 @@ export const UNIT_NAMES: Record<AccelerationUnits, string> = {
   'm/s2': 'm/s²',
   'cm/s2': 'cm/s² (gal)',
 };
+
+/** The storeys as the history routes take them (labels left out). */
+export const bareStoreys = (storeys: readonly StoreyInput[]) =>
+  storeys.map(({ mass, stiffness, height }) => ({ mass, stiffness, height }));
+
+/** Each level's elevation above the ground (m), level 1 first. */
+export function elevationsOf(storeys: readonly StoreyInput[]): number[] {
+  let top = 0;
+  return storeys.map((s) => (top += s.height));
+}
