@@ -331,6 +331,24 @@ const MATRIX: Cell[] = [
         .set(as(c)),
   },
   {
+    route: 'GET /api/calculations/:id/modal-responses',
+    allowed: everyone,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await locked()}/modal-responses`)
+        .set(as(c)),
+  },
+  {
+    route: 'GET /api/calculations/:id/modal-responses (returned)',
+    allowed: staff,
+    ok: 200,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await returned()}/modal-responses`)
+        .set(as(c)),
+  },
+  {
     route: 'GET /api/calculations/:id/changes (returned)',
     allowed: staff,
     ok: 200,

@@ -1,4 +1,5 @@
 import type { AnalysisRequest, AnalysisResponse } from './analysis';
+import type { AnalysisSummary } from './analysis-detail';
 import type { ChecksResponse, CodeBasisParameters } from './checks';
 import type { CodeBasis } from './projects';
 import type { ResponseHistoryResult, ResponseHistorySetup } from './response-history';
@@ -30,8 +31,11 @@ export interface CalculationDto {
   basis: CodeBasisParameters | null;
   /** The checks stored with the analysis (sealed with it), or null without a basis. */
   checks: ChecksResponse | null;
-  /** The stored analysis of the inputs, or null until analysed. */
-  analysis: AnalysisResponse | null;
+  /**
+   * The stored analysis of the inputs, or null until analysed: its summary (no per-mode storey
+   * vectors, no correlation matrix); `GET /api/calculations/:id/modal-responses` has the rest.
+   */
+  analysis: AnalysisSummary | null;
   /** The ground-motion record and how it is scaled, and the free vibration's start; or null. */
   history: ResponseHistorySetup | null;
   /** The response history made with the stored analysis (sealed with it), or null. */
@@ -280,3 +284,14 @@ export interface CalculationExport {
     }[];
   };
 }
+
+/**
+ * A calc with its whole stored analysis (`GET /api/calculations/:id?detail=full`): what the
+ * exports, the calc package and the seal work from.
+ */
+export type WholeCalculationDto = Omit<CalculationDto, 'analysis'> & {
+  analysis: AnalysisResponse | null;
+};
+
+/** `GET /api/calculations/:id`: the summary by default, the whole with `detail=full`. */
+export type CalculationAnswer = CalculationDto | WholeCalculationDto;

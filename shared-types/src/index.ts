@@ -4,6 +4,7 @@ export * from './users';
 export * from './auth';
 export * from './http';
 export * from './analysis';
+export * from './analysis-detail';
 export * from './projects';
 export * from './calculations';
 export * from './audit';

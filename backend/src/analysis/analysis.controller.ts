@@ -1,5 +1,6 @@
-import { Body, Controller, HttpCode, Post } from '@nestjs/common';
-import type { AnalysisResponse, ColumnStiffnessResponse } from '@tiermode/shared-types';
+import { Body, Controller, HttpCode, Post, Query } from '@nestjs/common';
+import type { AnalysisAnswer, ColumnStiffnessResponse } from '@tiermode/shared-types';
+import { analysisAnswer, parseAnalysisDetail } from './analysis-detail';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
 import { AnalysisRequestDto } from './dto/analysis-request.dto';
@@ -13,16 +14,20 @@ export class AnalysisController {
   constructor(private readonly analysis: AnalysisService) {}
 
   @ApiContract({
-    summary: 'Modal response spectrum analysis of a shear building',
+    summary:
+      'Modal response spectrum analysis of a shear building (detail=full, the default, or summary: no per-mode storey vectors or correlation matrix)',
+    query: 'AnalysisDetailQuery',
     body: 'AnalysisRequest',
-    returns: 'AnalysisResponse',
+    returns: 'AnalysisAnswer',
   })
   @Post()
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  run(@Body() body: AnalysisRequestDto): AnalysisResponse {
-    return this.analysis.analyse(body);
+  run(@Body() body: AnalysisRequestDto, @Query('detail') detail?: unknown): AnalysisAnswer {
+    // The whole answer stays the default: api-contract.md fixes its fields for outside callers.
+    const wanted = parseAnalysisDetail(detail, 'full');
+    return analysisAnswer(this.analysis.analyse(body), wanted);
   }
 
   /** A storey's lateral stiffness from its columns, for the storey table's helper. */

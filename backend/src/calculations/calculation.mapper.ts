@@ -1,4 +1,4 @@
-import type { AttachmentDto, CalculationDto } from '@tiermode/shared-types';
+import { summariseAnalysis, type AttachmentDto, type CalculationDto } from '@tiermode/shared-types';
 import type { CalculationRecord } from '../authorization/app-ability';
 import { projectSubject } from '../projects/project.mapper';
 import type { Attachment } from './attachment.entity';
@@ -23,7 +23,8 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     checks: calc.checks,
     history: calc.history,
     historyResults: calc.historyResults,
-    analysis: calc.analysis,
+    // The summary: the per-mode storey vectors and rho are GET .../modal-responses.
+    analysis: calc.analysis ? summariseAnalysis(calc.analysis) : null,
     engineVersion: calc.engineVersion,
     inputsChangedAt: calc.inputsChangedAt.toISOString(),
     analysedAt: calc.analysedAt?.toISOString() ?? null,

@@ -11,12 +11,15 @@ import {
   Query,
 } from '@nestjs/common';
 import type {
-  AnalysisResponse,
+  AnalysisAnswer,
   AuditEventDto,
+  CalculationAnswer,
   CalculationChanges,
   CalculationDto,
+  ModalDetail,
   SealCheckResponse,
 } from '@tiermode/shared-types';
+import { analysisAnswer, parseAnalysisDetail } from '../analysis/analysis-detail';
 import type { AppAbility } from '../authorization/app-ability';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';
@@ -63,14 +66,22 @@ export class CalculationsController {
     return this.calculations.create(ability, user, projectId, body);
   }
 
-  @ApiContract({ summary: 'One calc', returns: 'CalculationDto' })
+  @ApiContract({
+    summary:
+      'One calc, its stored analysis as a summary (detail=summary, the default) or whole (detail=full)',
+    query: 'AnalysisDetailQuery',
+    returns: 'CalculationAnswer',
+  })
   @Get('calculations/:id')
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
   get(
     @CurrentAbility() ability: AppAbility,
     @Param('id', UuidParam('id')) id: string,
-  ): Promise<CalculationDto> {
-    return this.calculations.get(ability, id);
+    @Query('detail') detail?: unknown,
+  ): Promise<CalculationAnswer> {
+    return parseAnalysisDetail(detail, 'summary') === 'full'
+      ? this.calculations.getWhole(ability, id)
+      : this.calculations.get(ability, id);
   }
 
   @ApiContract({
@@ -90,19 +101,36 @@ export class CalculationsController {
   }
 
   @ApiContract({
-    summary: 'Analyse the stored inputs and keep the result',
-    returns: 'AnalysisResponse',
+    summary: 'Analyse the stored inputs and keep the result (detail=full, the default, or summary)',
+    query: 'AnalysisDetailQuery',
+    returns: 'AnalysisAnswer',
   })
   @Post('calculations/:id/analyse')
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('read', 'Calculation'))
-  analyse(
+  async analyse(
     @CurrentAbility() ability: AppAbility,
     @CurrentUser() user: User,
     @Param('id', UuidParam('id')) id: string,
-  ): Promise<AnalysisResponse> {
-    return this.calculations.analyse(ability, user, id);
+    @Query('detail') detail?: unknown,
+  ): Promise<AnalysisAnswer> {
+    const wanted = parseAnalysisDetail(detail, 'full');
+    return analysisAnswer(await this.calculations.analyse(ability, user, id), wanted);
+  }
+
+  @ApiContract({
+    summary:
+      "The stored analysis's per-mode storey responses and correlation matrix (what the calc's summary leaves out)",
+    returns: 'ModalDetail',
+  })
+  @Get('calculations/:id/modal-responses')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  modalResponses(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<ModalDetail> {
+    return this.calculations.modalDetail(ability, id);
   }
 
   @ApiContract({ summary: 'Submit an analysed draft for review', returns: 'CalculationDto' })

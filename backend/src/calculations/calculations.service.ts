@@ -18,6 +18,9 @@ import type { AppEnvironment } from '../config/environment';
 import {
   changeNames,
   inputChanges,
+  modalDetailOf,
+  type ModalDetail,
+  type WholeCalculationDto,
   type AnalysisRequest,
   type AnalysisResponse,
   type CalculationChanges,
@@ -173,6 +176,16 @@ export class CalculationsService {
     return toCalculationDto(calc);
   }
 
+  /** The calc with its whole stored analysis (exports, the calc package, `?detail=full`). */
+  async getWhole(ability: AppAbility, id: string): Promise<WholeCalculationDto> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    return { ...toCalculationDto(calc), analysis: calc.analysis };
+  }
+
   async update(
     ability: AppAbility,
     actor: User,
@@ -265,6 +278,17 @@ export class CalculationsService {
       detail: { engineVersion: result.engineVersion, cqcBaseShear: result.combined.cqc.baseShear },
     });
     return result;
+  }
+
+  /** What the calc's summary leaves out of its stored analysis (per-mode responses, rho). */
+  async modalDetail(ability: AppAbility, id: string): Promise<ModalDetail> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    if (!calc.analysis) throw new NotFoundException('This calculation has not been analysed yet');
+    return modalDetailOf(calc.analysis);
   }
 
   /** Designer: send a draft whose stored analysis matches its inputs to review. */

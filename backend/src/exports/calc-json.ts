@@ -1,4 +1,4 @@
-import type { CalculationDto, CalculationExport } from '@tiermode/shared-types';
+import type { WholeCalculationDto, CalculationExport } from '@tiermode/shared-types';
 
 export const CALC_EXPORT_FORMAT = 'tiermode-calculation';
 export const CALC_EXPORT_VERSION = 1;
@@ -7,7 +7,7 @@ export const CALC_EXPORT_VERSION = 1;
  * The whole calc as one JSON document: what was entered, what was computed, and, once locked,
  * the seal. `POST /api/projects/:id/calculations/import` reads it back into a new draft.
  */
-export function calcExport(calc: CalculationDto, exportedAt: Date): CalculationExport {
+export function calcExport(calc: WholeCalculationDto, exportedAt: Date): CalculationExport {
   return {
     format: CALC_EXPORT_FORMAT,
     formatVersion: CALC_EXPORT_VERSION,

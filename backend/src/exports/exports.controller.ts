@@ -13,6 +13,7 @@ import {
   describeSpectrumSource,
   formatDateTime,
   type CalculationDto,
+  type WholeCalculationDto,
   type CalculationExport,
 } from '@tiermode/shared-types';
 import { exportUnits } from './export-units';
@@ -43,7 +44,7 @@ const TABLE_NAMES: Record<TableName, string> = {
 };
 
 /** A file name from a title: letters, digits and dashes only. */
-const fileName = (calc: CalculationDto, suffix: string) =>
+const fileName = (calc: WholeCalculationDto, suffix: string) =>
   `${calc.title.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'calculation'}-rev${calc.revision}-${suffix}`;
 
 const safeRows = (table: Table) => table.rows.map((row) => row.map(spreadsheetSafe));
@@ -54,7 +55,7 @@ export class ExportsController {
   constructor(private readonly calculations: CalculationsService) {}
 
   private async analysed(ability: AppAbility, id: string, units: string | undefined) {
-    const calc = await this.calculations.get(ability, id);
+    const calc = await this.calculations.getWhole(ability, id);
     if (!calc.analysis) {
       throw new ConflictException('This calculation has not been analysed yet: nothing to export');
     }
@@ -148,7 +149,7 @@ export class ExportsController {
     @CurrentAbility() ability: AppAbility,
     @Param('id', UuidParam('id')) id: string,
   ): Promise<CalculationExport> {
-    return calcExport(await this.calculations.get(ability, id), new Date());
+    return calcExport(await this.calculations.getWhole(ability, id), new Date());
   }
 
   @ApiContract({

@@ -8,10 +8,13 @@ import type * as C from '@tiermode/shared-types';
  * said to return one really returns that type.
  */
 export interface ContractTypes {
+  AnalysisAnswer: C.AnalysisAnswer;
+  AnalysisDetailQuery: C.AnalysisDetailQuery;
   AnalysisRequest: C.AnalysisRequest;
   AnalysisResponse: C.AnalysisResponse;
   AuditEventDto: C.AuditEventDto;
   AuditVerifyResponse: C.AuditVerifyResponse;
+  CalculationAnswer: C.CalculationAnswer;
   CalculationChanges: C.CalculationChanges;
   CalculationDto: C.CalculationDto;
   CalculationExport: C.CalculationExport;
@@ -36,6 +39,7 @@ export interface ContractTypes {
   ResponseHistoryResponse: C.ResponseHistoryResponse;
   HealthResponse: C.HealthResponse;
   LibraryEntryDto: C.LibraryEntryDto;
+  ModalDetail: C.ModalDetail;
   LockCalculationRequest: C.LockCalculationRequest;
   LoginRequest: C.LoginRequest;
   LoginResponse: C.LoginResponse;
@@ -58,6 +62,7 @@ export interface ContractTypes {
   UpdateUserRequest: C.UpdateUserRequest;
   UserDto: C.UserDto;
   VerificationCaseResult: C.VerificationCaseResult;
+  WholeCalculationDto: C.WholeCalculationDto;
 }
 
 export type ContractName = keyof ContractTypes;

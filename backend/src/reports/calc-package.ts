@@ -3,7 +3,7 @@ import {
   shapeNormalisationNote,
   toDisplay,
   unitLabel,
-  type CalculationDto,
+  type WholeCalculationDto,
   type CombinedResponse,
   type SealCheckResponse,
   type UnitSystem,
@@ -25,7 +25,7 @@ const STATUS = {
   superseded: 'Superseded by a newer revision',
 } as const;
 
-function cover(doc: Doc, calc: CalculationDto, check: SealCheckResponse | null, at: Date) {
+function cover(doc: Doc, calc: WholeCalculationDto, check: SealCheckResponse | null, at: Date) {
   doc.fontSize(20);
   write(doc, calc.title, { bold: true });
   doc.fontSize(11).moveDown(0.3);
@@ -73,7 +73,7 @@ function cover(doc: Doc, calc: CalculationDto, check: SealCheckResponse | null, 
   );
 }
 
-function inputs(doc: Doc, calc: CalculationDto, units: UnitSystem) {
+function inputs(doc: Doc, calc: WholeCalculationDto, units: UnitSystem) {
   const { storeys, spectrum, dampingRatio, modeCount } = calc.inputs;
   heading(doc, 'Inputs: storey table');
   table(
@@ -168,7 +168,7 @@ const SUBSTITUTES: Record<string, string> = {
   '…': '...',
 };
 
-function results(doc: Doc, calc: CalculationDto, units: UnitSystem) {
+function results(doc: Doc, calc: WholeCalculationDto, units: UnitSystem) {
   const analysis = calc.analysis;
   heading(doc, 'Modes and participation');
   if (!analysis) {
@@ -319,7 +319,7 @@ function results(doc: Doc, calc: CalculationDto, units: UnitSystem) {
   }
 }
 
-function review(doc: Doc, calc: CalculationDto, units: UnitSystem) {
+function review(doc: Doc, calc: WholeCalculationDto, units: UnitSystem) {
   heading(doc, 'Code-basis checks');
   const checks = calc.checks;
   if (!checks || calc.analysisStale) {
@@ -418,8 +418,8 @@ function review(doc: Doc, calc: CalculationDto, units: UnitSystem) {
 /** The design storey values beside the elastic ones, each column named. */
 function designValues(
   doc: Doc,
-  calc: CalculationDto,
-  design: NonNullable<NonNullable<CalculationDto['checks']>['design']>,
+  calc: WholeCalculationDto,
+  design: NonNullable<NonNullable<WholeCalculationDto['checks']>['design']>,
   units: UnitSystem,
 ) {
   const analysis = calc.analysis;
@@ -470,7 +470,7 @@ function designValues(
 }
 
 /** Page numbers on every page, and PRELIMINARY across each page of a calc that is not locked. */
-function decorate(doc: Doc, calc: CalculationDto) {
+function decorate(doc: Doc, calc: WholeCalculationDto) {
   const range = doc.bufferedPageRange();
   const preliminary = calc.status !== 'locked' && calc.status !== 'superseded';
   for (let i = range.start; i < range.start + range.count; i += 1) {
@@ -502,7 +502,7 @@ function decorate(doc: Doc, calc: CalculationDto) {
  * sealed data, and the cover says whether that data still matches the seal.
  */
 export async function buildCalcPackage(
-  calc: CalculationDto,
+  calc: WholeCalculationDto,
   check: SealCheckResponse | null,
   generatedAt: Date,
   units: UnitSystem = calc.displayUnits,

@@ -1,7 +1,7 @@
 import {
   historyComparison,
   toDisplay,
-  type CalculationDto,
+  type WholeCalculationDto,
   type UnitSystem,
 } from '@tiermode/shared-types';
 import { formats as f, inUnits, withUnit } from './formats';
@@ -17,7 +17,7 @@ const time = (s: number) => s.toFixed(2);
  * responses to it with their times, the comparison with the combined spectrum results, and the
  * free vibration. Nothing when the calc has no record.
  */
-export function historySection(doc: Doc, calc: CalculationDto, units: UnitSystem): void {
+export function historySection(doc: Doc, calc: WholeCalculationDto, units: UnitSystem): void {
   const setup = calc.history;
   if (!setup) return;
   doc.addPage();

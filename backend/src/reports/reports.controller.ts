@@ -26,7 +26,7 @@ export class ReportsController {
     @Param('id', UuidParam('id')) id: string,
     @Query('units') units?: string,
   ): Promise<StreamableFile> {
-    const calc = await this.calculations.get(ability, id);
+    const calc = await this.calculations.getWhole(ability, id);
     const shown = exportUnits(units, calc);
     const check = calc.seal ? await this.calculations.checkSeal(ability, id) : null;
     const pdf = await buildCalcPackage(calc, check, new Date(), shown);

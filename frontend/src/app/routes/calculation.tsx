@@ -31,6 +31,7 @@ import { ChecksResults } from '@/features/checks/components/checks-results';
 import {
   useCalculation,
   useSaveAndAnalyse,
+  storedModalDetail,
   useSaveCalculation,
 } from '@/features/calculations/api/calculations';
 import { AttachmentsPanel } from '@/features/calculations/components/attachments-panel';
@@ -313,7 +314,12 @@ function CalculationWorkspace({ calc, user }: { calc: CalculationDto; user: User
                   Engine {calc.engineVersion}
                   {calc.analysedAt ? `, ${formatDateTime(calc.analysedAt)}` : ''}.
                 </Typography>
-                <AnalysisResults result={result} storeys={calc.inputs.storeys} units={units} />
+                <AnalysisResults
+                  result={result}
+                  detail={storedModalDetail(calc.id, calc.analysedAt)}
+                  storeys={calc.inputs.storeys}
+                  units={units}
+                />
               </>
             )}
           </Stack>

@@ -1,16 +1,19 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import type { AnalysisRequest, AnalysisResponse } from '@tiermode/shared-types';
+import type { AnalysisRequest, AnalysisSummary } from '@tiermode/shared-types';
 import { api } from '@/lib/api-client';
 
-export async function runAnalysis(body: AnalysisRequest): Promise<AnalysisResponse> {
-  const { data } = await api.post<AnalysisResponse>('/analysis', body);
+/** The summary: the screens that show per-mode responses or rho fetch them (modal-detail.ts). */
+export async function runAnalysis(body: AnalysisRequest): Promise<AnalysisSummary> {
+  const { data } = await api.post<AnalysisSummary>('/analysis', body, {
+    params: { detail: 'summary' },
+  });
   return data;
 }
 
 /** Results together with the inputs they were computed from. */
 export interface AnalysedInputs {
   inputs: AnalysisRequest;
-  result: AnalysisResponse;
+  result: AnalysisSummary;
 }
 
 /**

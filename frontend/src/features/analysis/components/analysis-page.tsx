@@ -6,6 +6,7 @@ import { errorMessages } from '@/lib/api-client';
 import '@/lib/charts';
 import type { UnitSystem } from '@/lib/units';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
+import { statelessModalDetail } from '../api/modal-detail';
 import { useAnalysis } from '../api/run-analysis';
 import { STARTING_INPUTS } from '../model/starting-inputs';
 import { useAnalysisInputs } from '../model/use-analysis-inputs';
@@ -88,7 +89,12 @@ export function AnalysisPage({
       </Box>
 
       {result && analysis.data && (
-        <AnalysisResults result={result} storeys={analysis.data.inputs.storeys} units={units} />
+        <AnalysisResults
+          result={result}
+          detail={statelessModalDetail(analysis.data.inputs)}
+          storeys={analysis.data.inputs.storeys}
+          units={units}
+        />
       )}
     </Stack>
   );

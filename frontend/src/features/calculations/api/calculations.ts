@@ -1,6 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
-  AnalysisResponse,
+  AnalysisSummary,
+  ModalDetail,
   AuditEventDto,
   CalculationChanges,
   CalculationDto,
@@ -144,6 +145,17 @@ export function useSaveCalculation(id: string) {
   });
 }
 
+/**
+ * Where the stored analysis's per-mode storey responses and rho come from (the calc carries its
+ * summary): named by the calc and the time it was analysed, so a new analysis fetches anew.
+ */
+export function storedModalDetail(id: string, analysedAt: string | null) {
+  return {
+    key: ['calculation', id, 'modal-responses', analysedAt] as const,
+    load: async () => (await api.get<ModalDetail>(`/calculations/${id}/modal-responses`)).data,
+  };
+}
+
 /** Saves the inputs when they changed, then analyses what is stored. */
 export function useSaveAndAnalyse(id: string) {
   const refresh = useRefresh();
@@ -156,7 +168,9 @@ export function useSaveAndAnalyse(id: string) {
       if (change.inputs || change.displayUnits) {
         await api.patch<CalculationDto>(`/calculations/${id}`, change);
       }
-      await api.post<AnalysisResponse>(`/calculations/${id}/analyse`);
+      await api.post<AnalysisSummary>(`/calculations/${id}/analyse`, undefined, {
+        params: { detail: 'summary' },
+      });
       return (await api.get<CalculationDto>(`/calculations/${id}`)).data;
     },
     onSuccess: (calc) => refresh(calc),

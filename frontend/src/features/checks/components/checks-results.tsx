@@ -12,7 +12,7 @@ import {
   TableRow,
   Typography,
 } from '@mui/material';
-import type { AnalysisResponse, ChecksResponse, StoreyInput } from '@tiermode/shared-types';
+import type { AnalysisSummary, ChecksResponse, StoreyInput } from '@tiermode/shared-types';
 import { DesignStoreyTable } from './design-storey-table';
 import { Scatter } from 'react-chartjs-2';
 import { SERIES_COLOURS, STATIC_CHART } from '@/lib/charts';
@@ -31,7 +31,7 @@ export function ChecksResults({
 }: {
   checks: ChecksResponse;
   /** The analysis the checks were made with, for the elastic values beside the design ones. */
-  analysis: AnalysisResponse;
+  analysis: AnalysisSummary;
   storeys: StoreyInput[];
   units: UnitSystem;
 }) {

@@ -1,6 +1,6 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import type { FreeVibrationSetup, ModeResult } from '@tiermode/shared-types';
+import type { FreeVibrationSetup, ModeSummary } from '@tiermode/shared-types';
 import { useState } from 'react';
 import { describe, expect, it, vi } from 'vitest';
 import { renderWithProviders } from '@/testing/render';
@@ -19,7 +19,7 @@ const storeys = [
 const modes = [
   { number: 1, period: 0.5, shape: [0.618, 1] },
   { number: 2, period: 0.19, shape: [-1.618, 1] },
-] as ModeResult[];
+] as ModeSummary[];
 
 function Harness({
   units,

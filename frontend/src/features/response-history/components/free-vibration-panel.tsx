@@ -14,7 +14,7 @@ import {
 import type {
   FreeVibrationRequest,
   FreeVibrationSetup,
-  ModeResult,
+  ModeSummary,
   StoreyInput,
 } from '@tiermode/shared-types';
 import { ScrollFrame } from '@/components/data-display/scroll-frame';
@@ -44,7 +44,7 @@ export function FreeVibrationPanel({
   storeys: StoreyInput[];
   dampingRatio: number;
   /** The analysis's modes (their shapes are the mode starts). */
-  modes: ModeResult[];
+  modes: ModeSummary[];
   units: UnitSystem;
   setup: FreeVibrationSetup;
   onChange: (setup: FreeVibrationSetup) => void;

@@ -11,7 +11,7 @@ import {
 } from '@mui/material';
 import {
   historyComparison,
-  type AnalysisResponse,
+  type AnalysisSummary,
   type ResponseHistoryResult,
   type ResponseHistorySetup,
   type StoreyInput,
@@ -43,7 +43,7 @@ export function HistoryResults({
 }: {
   results: ResponseHistoryResult;
   setup: ResponseHistorySetup;
-  analysis: AnalysisResponse;
+  analysis: AnalysisSummary;
   storeys: StoreyInput[];
   dampingRatio: number;
   units: UnitSystem;

@@ -1,9 +1,10 @@
 import { Alert, Box, Typography } from '@mui/material';
-import type { AnalysisResponse, StoreyInput } from '@tiermode/shared-types';
+import type { AnalysisSummary, StoreyInput } from '@tiermode/shared-types';
+import type { ModalDetailSource } from '../../api/modal-detail';
 import { Section } from '@/components/layouts/section';
 import type { UnitSystem } from '@/lib/units';
 import { elevations } from '../../model/storey-rows';
-import { CorrelationTable } from './correlation-table';
+import { FetchedCorrelationTable } from './correlation-table';
 import { MassChart } from './mass-chart';
 import { MethodView } from './method-view';
 import { ModeShapesPanel } from './mode-shapes-panel';
@@ -18,10 +19,13 @@ import { StoreyResponsesTable } from './storey-responses-table';
  */
 export function AnalysisResults({
   result,
+  detail,
   storeys,
   units,
 }: {
-  result: AnalysisResponse;
+  result: AnalysisSummary;
+  /** Where the per-mode storey responses and rho come from, fetched when a screen shows them. */
+  detail: ModalDetailSource;
   storeys: StoreyInput[];
   units: UnitSystem;
 }) {
@@ -54,14 +58,14 @@ export function AnalysisResults({
         <Typography variant="h3" sx={{ mt: 2 }} gutterBottom>
           Storey by storey
         </Typography>
-        <StoreyResponsesTable result={result} storeys={storeys} units={units} />
+        <StoreyResponsesTable result={result} detail={detail} storeys={storeys} units={units} />
         <Typography variant="h3" sx={{ mt: 2 }} gutterBottom>
           Correlation coefficients (CQC)
         </Typography>
-        <CorrelationTable correlation={result.correlation} />
+        <FetchedCorrelationTable result={result} detail={detail} />
       </Section>
       <Section title="Method, step by step">
-        <MethodView storeys={storeys} result={result} units={units} />
+        <MethodView storeys={storeys} result={result} detail={detail} units={units} />
       </Section>
     </>
   );

@@ -1,5 +1,30 @@
 import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import { Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import type { AnalysisSummary } from '@tiermode/shared-types';
+import { useInView } from 'react-intersection-observer';
+import { useWholeAnalysis, type ModalDetailSource } from '../../api/modal-detail';
+import { DetailStatus } from './detail-status';
+
+/** The correlation table of a summary's analysis, fetched once it scrolls near the screen. */
+export function FetchedCorrelationTable({
+  result,
+  detail,
+}: {
+  result: AnalysisSummary;
+  detail: ModalDetailSource;
+}) {
+  const { ref, inView } = useInView({ triggerOnce: true, rootMargin: '400px 0px' });
+  const { whole, loading, error } = useWholeAnalysis(result, detail, inView);
+  return (
+    <div ref={ref}>
+      {whole ? (
+        <CorrelationTable correlation={whole.correlation} />
+      ) : (
+        <DetailStatus loading={loading} error={error} />
+      )}
+    </div>
+  );
+}
 
 /** The CQC correlation coefficients rho_ij, shaded by size; shown for up to 12 modes. */
 export function CorrelationTable({ correlation }: { correlation: number[][] }) {

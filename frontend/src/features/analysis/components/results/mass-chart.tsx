@@ -1,10 +1,10 @@
 import { Box } from '@mui/material';
-import type { ModeResult } from '@tiermode/shared-types';
+import type { ModeSummary } from '@tiermode/shared-types';
 import { Chart } from 'react-chartjs-2';
 import { SERIES_COLOURS, STATIC_CHART } from '@/lib/charts';
 
 /** Effective modal mass of each mode as bars, the cumulative ratio as a line, and the 90% mark. */
-export function MassChart({ modes }: { modes: ModeResult[] }) {
+export function MassChart({ modes }: { modes: ModeSummary[] }) {
   const shown = modes.slice(0, 30);
   return (
     <Box

@@ -13,10 +13,13 @@ import {
 import {
   shapeNormalisationNote,
   STANDARD_GRAVITY,
-  type AnalysisResponse,
+  type AnalysisSummary,
   type StoreyInput,
 } from '@tiermode/shared-types';
 import { useState } from 'react';
+import { useInView } from 'react-intersection-observer';
+import { useWholeAnalysis, type ModalDetailSource } from '../../api/modal-detail';
+import { DetailStatus } from './detail-status';
 import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 
 /** Up to this many storeys M and K are written out in full; above it, row by row in band form. */
@@ -59,13 +62,18 @@ function Matrix({ label, values }: { label: string; values: string[][] }) {
 export function MethodView({
   storeys: rows,
   result,
+  detail,
   units,
 }: {
   storeys: StoreyInput[];
-  result: AnalysisResponse;
+  result: AnalysisSummary;
+  /** Where the worked mode's floor forces and displacements come from, once it is on view. */
+  detail: ModalDetailSource;
   units: UnitSystem;
 }) {
   const [modeNumber, setModeNumber] = useState(result.modes[0]?.number ?? 1);
+  const { ref, inView } = useInView({ triggerOnce: true, rootMargin: '400px 0px' });
+  const fetched = useWholeAnalysis(result, detail, inView);
   const n = rows.length;
   const us = units === 'US';
   const massUnit = us ? 'kip·s²/in' : 't';
@@ -82,6 +90,7 @@ export function MethodView({
         ? -rows[Math.max(i, j)].stiffness
         : 0;
   const mode = result.modes.find((m) => m.number === modeNumber) ?? result.modes[0];
+  const response = fetched.whole?.modes.find((m) => m.number === mode?.number)?.response;
   const a = mode ? mode.sa * G : 0;
   const products = mode ? rows.map((r, i) => r.mass * mode.shape[i]) : [];
   const l = products.reduce((sum, v) => sum + v, 0);
@@ -176,7 +185,7 @@ export function MethodView({
                 <TableCell align="right">{m.sa.toFixed(4)}</TableCell>
                 <TableCell align="right">{formatNumber(m.sa * G)}</TableCell>
                 <TableCell align="right">
-                  {formatNumber(toDisplay(units, 'force', m.response.baseShear))}
+                  {formatNumber(toDisplay(units, 'force', m.baseShear))}
                 </TableCell>
               </TableRow>
             ))}
@@ -186,6 +195,7 @@ export function MethodView({
 
       {mode && (
         <Box
+          ref={ref}
           component="section"
           aria-label="One mode, step by step"
           sx={{ display: 'grid', gap: 1, gridTemplateColumns: 'minmax(0, 1fr)' }}
@@ -224,54 +234,54 @@ export function MethodView({
           </Typography>
           <Typography>
             5. Floor forces fᵢ = Γ mᵢ φᵢ Aₙ and displacements uᵢ = Γ φᵢ Aₙ / ω²; their sum, the base
-            shear, is M* Aₙ = {formatNumber(toDisplay(units, 'force', mode.response.baseShear))}{' '}
-            {force}.
+            shear, is M* Aₙ = {formatNumber(toDisplay(units, 'force', mode.baseShear))} {force}.
           </Typography>
-          <ScrollFrame label={`Mode ${mode.number}, level by level, scrolling`} maxHeight={380}>
-            <Table size="small" stickyHeader aria-label={`Mode ${mode.number}, level by level`}>
-              <TableHead>
-                <TableRow>
-                  <TableCell>Level</TableCell>
-                  <TableCell align="right">mᵢ ({massUnit})</TableCell>
-                  <TableCell align="right">φᵢ</TableCell>
-                  <TableCell align="right">mᵢ φᵢ</TableCell>
-                  <TableCell align="right">mᵢ φᵢ²</TableCell>
-                  <TableCell align="right">fᵢ ({force})</TableCell>
-                  <TableCell align="right">uᵢ ({length})</TableCell>
-                </TableRow>
-              </TableHead>
-              <TableBody>
-                {rows.map((r, i) => (
-                  <TableRow key={i}>
-                    <TableCell>{i + 1}</TableCell>
-                    <TableCell align="right">{formatNumber(mass(r.mass))}</TableCell>
-                    <TableCell align="right">{formatNumber(mode.shape[i])}</TableCell>
-                    <TableCell align="right">{formatNumber(mass(products[i]))}</TableCell>
-                    <TableCell align="right">
-                      {formatNumber(mass(r.mass * mode.shape[i] ** 2))}
-                    </TableCell>
-                    <TableCell align="right">
-                      {formatNumber(toDisplay(units, 'force', mode.response.floorForce[i]))}
-                    </TableCell>
-                    <TableCell align="right">
-                      {formatNumber(
-                        toDisplay(units, 'displacement', mode.response.displacement[i]),
-                      )}
-                    </TableCell>
+          {!response && <DetailStatus loading={fetched.loading} error={fetched.error} />}
+          {response && (
+            <ScrollFrame label={`Mode ${mode.number}, level by level, scrolling`} maxHeight={380}>
+              <Table size="small" stickyHeader aria-label={`Mode ${mode.number}, level by level`}>
+                <TableHead>
+                  <TableRow>
+                    <TableCell>Level</TableCell>
+                    <TableCell align="right">mᵢ ({massUnit})</TableCell>
+                    <TableCell align="right">φᵢ</TableCell>
+                    <TableCell align="right">mᵢ φᵢ</TableCell>
+                    <TableCell align="right">mᵢ φᵢ²</TableCell>
+                    <TableCell align="right">fᵢ ({force})</TableCell>
+                    <TableCell align="right">uᵢ ({length})</TableCell>
                   </TableRow>
-                ))}
-                <TableRow>
-                  <TableCell colSpan={3}>Sum</TableCell>
-                  <TableCell align="right">{formatNumber(mass(l))}</TableCell>
-                  <TableCell align="right">{formatNumber(mass(mn))}</TableCell>
-                  <TableCell align="right">
-                    {formatNumber(toDisplay(units, 'force', mode.response.baseShear))}
-                  </TableCell>
-                  <TableCell />
-                </TableRow>
-              </TableBody>
-            </Table>
-          </ScrollFrame>
+                </TableHead>
+                <TableBody>
+                  {rows.map((r, i) => (
+                    <TableRow key={i}>
+                      <TableCell>{i + 1}</TableCell>
+                      <TableCell align="right">{formatNumber(mass(r.mass))}</TableCell>
+                      <TableCell align="right">{formatNumber(mode.shape[i])}</TableCell>
+                      <TableCell align="right">{formatNumber(mass(products[i]))}</TableCell>
+                      <TableCell align="right">
+                        {formatNumber(mass(r.mass * mode.shape[i] ** 2))}
+                      </TableCell>
+                      <TableCell align="right">
+                        {formatNumber(toDisplay(units, 'force', response.floorForce[i]))}
+                      </TableCell>
+                      <TableCell align="right">
+                        {formatNumber(toDisplay(units, 'displacement', response.displacement[i]))}
+                      </TableCell>
+                    </TableRow>
+                  ))}
+                  <TableRow>
+                    <TableCell colSpan={3}>Sum</TableCell>
+                    <TableCell align="right">{formatNumber(mass(l))}</TableCell>
+                    <TableCell align="right">{formatNumber(mass(mn))}</TableCell>
+                    <TableCell align="right">
+                      {formatNumber(toDisplay(units, 'force', mode.baseShear))}
+                    </TableCell>
+                    <TableCell />
+                  </TableRow>
+                </TableBody>
+              </Table>
+            </ScrollFrame>
+          )}
         </Box>
       )}
       <Typography>

@@ -1,11 +1,11 @@
 import { Box } from '@mui/material';
-import type { ModeResult } from '@tiermode/shared-types';
+import type { ModeSummary } from '@tiermode/shared-types';
 import { Scatter } from 'react-chartjs-2';
 import { SERIES_COLOURS, STATIC_CHART } from '@/lib/charts';
 import { toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 
 interface Props {
-  modes: ModeResult[];
+  modes: ModeSummary[];
   elevations: number[];
   units: UnitSystem;
 }

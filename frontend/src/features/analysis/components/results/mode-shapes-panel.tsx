@@ -11,14 +11,14 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
-import { shapeNormalisationNote, type ModeResult, type StoreyInput } from '@tiermode/shared-types';
+import { shapeNormalisationNote, type ModeSummary, type StoreyInput } from '@tiermode/shared-types';
 import { useState } from 'react';
 import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '@/lib/units';
 import { elevations as elevationsOf } from '../../model/storey-rows';
 import { ModeShapeChart } from './mode-shape-chart';
 import { SwayAnimation } from './sway-animation';
 
-const label = (m: ModeResult) => `Mode ${m.number} (T = ${formatNumber(m.period)} s)`;
+const label = (m: ModeSummary) => `Mode ${m.number} (T = ${formatNumber(m.period)} s)`;
 
 /**
  * Mode shapes: any modes chosen, drawn against elevation, their values level by level for any
@@ -29,7 +29,7 @@ export function ModeShapesPanel({
   storeys,
   units,
 }: {
-  modes: ModeResult[];
+  modes: ModeSummary[];
   storeys: StoreyInput[];
   units: UnitSystem;
 }) {

@@ -1,10 +1,10 @@
 import { ScrollFrame } from '@/components/data-display/scroll-frame';
 import { Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
-import { shapeNormalisationNote, type ModeResult } from '@tiermode/shared-types';
+import { shapeNormalisationNote, type ModeSummary } from '@tiermode/shared-types';
 import { formatNumber } from '@/lib/units';
 
 /** Periods, frequencies, participation and effective masses, one mode a row. */
-export function ModesTable({ modes }: { modes: ModeResult[] }) {
+export function ModesTable({ modes }: { modes: ModeSummary[] }) {
   return (
     <ScrollFrame label="Modes, scrolling">
       <Table size="small" aria-label="Modes">

@@ -1,12 +1,12 @@
 import { Box, Grid } from '@mui/material';
-import type { AnalysisResponse } from '@tiermode/shared-types';
+import type { AnalysisSummary } from '@tiermode/shared-types';
 import { Scatter } from 'react-chartjs-2';
 import { SERIES_COLOURS, STATIC_CHART } from '@/lib/charts';
 import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '@/lib/units';
 import { COMBINATION_STYLES } from '../../model/combination-styles';
 
 interface Props {
-  result: AnalysisResponse;
+  result: AnalysisSummary;
   elevations: number[];
   units: UnitSystem;
 }

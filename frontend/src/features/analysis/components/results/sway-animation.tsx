@@ -1,7 +1,7 @@
 import PauseIcon from '@mui/icons-material/Pause';
 import PlayArrowIcon from '@mui/icons-material/PlayArrow';
 import { Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
-import type { ModeResult } from '@tiermode/shared-types';
+import type { ModeSummary } from '@tiermode/shared-types';
 import { useEffect, useRef, useState } from 'react';
 import { BuildingDrawing } from '@/components/data-display/building-drawing';
 import { formatNumber } from '@/lib/units';
@@ -20,7 +20,7 @@ export function SwayAnimation({
   modes,
   elevations,
 }: {
-  modes: ModeResult[];
+  modes: ModeSummary[];
   /** m, level 1 first */
   elevations: number[];
 }) {
