@@ -142,6 +142,37 @@ describe('Tokens', () => {
     const forged = forgeToken({ claims: { sub: made.body.id, sv: 1 } });
     await http().get('/api/projects').set('Authorization', `Bearer ${forged}`).expect(401);
   });
+
+  it('applies a role change and a sign-out on the very next request, though the user is kept in memory', async () => {
+    const adminToken = (await login('admin@tiermode.test', 'tiermode-demo').expect(200)).body
+      .accessToken as string;
+    const made = await http()
+      .post('/api/users')
+      .set('Authorization', `Bearer ${adminToken}`)
+      .send({
+        email: 'mover@tiermode.test',
+        name: 'Mo Mover',
+        role: 'designer',
+        password: 'moving-desks-2026',
+      })
+      .expect(201);
+    const token = (await login('mover@tiermode.test', 'moving-desks-2026').expect(200)).body
+      .accessToken as string;
+    const bearer = { Authorization: `Bearer ${token}` };
+    // Twice, so the second is answered from the row kept since the first.
+    await http().post('/api/projects').set(bearer).send({ name: 'Mine' }).expect(201);
+    await http().post('/api/projects').set(bearer).send({ name: 'Mine too' }).expect(201);
+    await http()
+      .patch(`/api/users/${made.body.id}`)
+      .set('Authorization', `Bearer ${adminToken}`)
+      .send({ version: made.body.version, role: 'student' })
+      .expect(200);
+    await http().post('/api/projects').set(bearer).send({ name: 'Not now' }).expect(403);
+    const me = await http().get('/api/auth/me').set(bearer).expect(200);
+    expect(me.body.user.role).toBe('student');
+    await http().post('/api/auth/logout').set(bearer).expect(204);
+    await http().get('/api/auth/me').set(bearer).expect(401);
+  });
 });
 
 describe('Hostile text', () => {

@@ -8,6 +8,7 @@ import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER, JWT_LIFETIME_SECONDS } from './jwt-claims';
 import { JwtStrategy } from './jwt.strategy';
+import { SignedInUsers } from './signed-in-users';
 import {
   LOGIN_FAILURE_LIMIT,
   LOGIN_FAILURE_WINDOW_MS,
@@ -36,6 +37,6 @@ import {
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy, LoginThrottleService],
+  providers: [AuthService, JwtStrategy, LoginThrottleService, SignedInUsers],
 })
 export class AuthModule {}

@@ -7,17 +7,19 @@ import { ExtractJwt, Strategy } from 'passport-jwt';
 import type { AppEnvironment } from '../config/environment';
 import { User } from '../users/user.entity';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER, type TokenClaims } from './jwt-claims';
+import { SignedInUsers } from './signed-in-users';
 
 /**
  * passport-jwt verifies the token (signature with HS256 only, expiry, issuer, audience); this
- * strategy then loads the user, so a deactivated user or a token from before the last sign-out
- * or password change is refused at once.
+ * strategy then loads the user (kept in memory between changes: SignedInUsers), so a deactivated
+ * user or a token from before the last sign-out or password change is refused at once.
  */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(
     config: ConfigService<AppEnvironment, true>,
     private readonly em: EntityManager,
+    private readonly users: SignedInUsers,
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
@@ -38,7 +40,7 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
     if (typeof claims.sub !== 'string' || typeof claims.sv !== 'number') {
       throw new UnauthorizedException('Your sign-in is not valid; please sign in again');
     }
-    const user = await this.em.findOne(User, { id: claims.sub });
+    const user = await this.users.find(this.em, claims.sub);
     if (!user || !user.active || user.sessionVersion !== claims.sv) {
       throw new UnauthorizedException('Your sign-in has ended; please sign in again');
     }
