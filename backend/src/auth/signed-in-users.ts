@@ -43,12 +43,12 @@ export class SignedInUsers implements EventSubscriber<User>, OnModuleInit {
   async find(em: EntityManager, id: string): Promise<User | null> {
     let row = this.rows.get(id);
     if (!row) {
-      const found = (await em
+      const found = await em
         .createQueryBuilder(User)
         .select('*')
         .where({ id })
         .limit(1)
-        .execute('get', false)) as EntityData<User> | undefined;
+        .execute<EntityData<User> | undefined>('get', false);
       if (!found) return null;
       row = found;
       if (this.rows.size >= MAX_ROWS) this.rows.delete(this.rows.keys().next().value as string);
