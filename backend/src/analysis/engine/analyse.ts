@@ -3,7 +3,7 @@ import { correlationMatrix } from './combination';
 import { combineModalResponses } from './combined-response';
 import { modalResponse } from './modal-response';
 import { selectModeCount } from './mode-selection';
-import { naturalModes, type Mode } from './modes';
+import { lowestModes, naturalModes, type Mode } from './modes';
 import { assertStoreys, type Storey } from './shear-building';
 import { assertSpectrum, spectralAcceleration } from './spectrum';
 import { analysisWarnings, type CodeBasisCode } from './analysis-warnings';
@@ -40,25 +40,28 @@ export function assertAnalysisRequest(request: AnalysisRequest): void {
  * The whole modal response spectrum analysis of a shear building: modes, spectral values,
  * modal maxima, and their SRSS, CQC and ABS combinations (method.md). Pure: the input is not
  * changed. Throws TypeError/RangeError naming the field when the input is not valid.
- * `solveModes` is the eigensolution; the benchmark swaps in a general dense solver to compare.
+ * All modes are solved by default; where the request keeps fewer (`modeCount`, or
+ * `targetMassRatio`, the fewest modes reaching that cumulative effective mass ratio), only those
+ * are solved (lowestModes). `solveModes` replaces the eigensolution: the benchmark swaps in a
+ * general dense solver to compare, and the tests the all-modes solver.
  */
 export function analyse(
   request: AnalysisRequest,
-  solveModes: (storeys: readonly Storey[]) => Mode[] = naturalModes,
+  solveModes?: (storeys: readonly Storey[]) => Mode[],
   /** The calc's code basis, whose clauses the warnings cite. */
   codeBasis?: CodeBasisCode,
 ): AnalysisResponse {
   assertAnalysisRequest(request);
   const { storeys, spectrum, dampingRatio } = request;
   const interpolation = spectrum.interpolation ?? 'linear';
-  const allModes = solveModes(storeys);
-  const used = allModes.slice(
-    0,
-    selectModeCount(allModes, {
-      modeCount: request.modeCount,
-      targetMassRatio: request.targetMassRatio,
-    }),
-  );
+  const selection = { modeCount: request.modeCount, targetMassRatio: request.targetMassRatio };
+  const truncated = selection.modeCount !== undefined || selection.targetMassRatio !== undefined;
+  const solved = solveModes
+    ? solveModes(storeys)
+    : truncated
+      ? lowestModes(storeys, selection)
+      : naturalModes(storeys);
+  const used = solved.slice(0, selectModeCount(solved, selection));
   const end = beyondTheTable(spectrum);
   const lastPeriod = spectrum.points[spectrum.points.length - 1].period;
   const modes: ModeResult[] = used.map((mode) => {
@@ -109,7 +112,7 @@ export function analyse(
   return {
     totalMass,
     modes,
-    availableModes: allModes.length,
+    availableModes: storeys.length,
     combined,
     correlation,
     warnings,

@@ -1,5 +1,6 @@
 import { assertStoreys, stiffnessTridiagonal, type Storey } from './shear-building';
-import { shearBuildingFrequencies } from './shear-building-frequencies';
+import { lowestFrequencies, shearBuildingFrequencies } from './shear-building-frequencies';
+import { assertModeSelection, selectModeCount, type ModeSelection } from './mode-selection';
 import {
   symmetricTridiagonalEigenvalues,
   tridiagonalEigenvectors,
@@ -60,6 +61,38 @@ export function naturalModes(storeys: readonly Storey[]): Mode[] {
   const { diagonal, offDiagonal } = stiffnessTridiagonal(storeys);
   const vectors = tridiagonalEigenvectors(diagonal, offDiagonal, values, rootMass);
   return modesFromEigenpairs(storeys, rootMass, values, vectors, omegas);
+}
+
+/**
+ * Only the modes a truncated analysis keeps, fundamental first: the first `modeCount`, or the
+ * fewest whose cumulative effective mass ratio reaches `targetMassRatio` (all of them if none
+ * does). Each frequency by bisection with Sturm counts (lowestFrequencies), each vector by inverse
+ * iteration, so the work grows with the modes kept, not with all N; the modes are those
+ * naturalModes gives, to rounding (lowest-modes.spec.ts checks it). For a mass target the batch
+ * doubles until the target is reached.
+ */
+export function lowestModes(storeys: readonly Storey[], selection: ModeSelection): Mode[] {
+  const n = storeys.length;
+  assertModeSelection(selection, n);
+  const { a, b, rootMass } = standardForm(storeys);
+  const norm = tridiagonalNorm(a, b);
+  const { diagonal, offDiagonal } = stiffnessTridiagonal(storeys);
+  const solve = (count: number) => {
+    const omegas = lowestFrequencies(storeys, count, norm);
+    const values = omegas.map((omega) => omega * omega);
+    const vectors = tridiagonalEigenvectors(diagonal, offDiagonal, values, rootMass);
+    return modesFromEigenpairs(storeys, rootMass, values, vectors, omegas);
+  };
+  if (selection.modeCount !== undefined) return solve(selection.modeCount);
+  // Double the batch until the target is reached: at most twice the work of knowing the count.
+  for (let count = Math.min(4, n); ; count = Math.min(2 * count, n)) {
+    const modes = solve(count);
+    const kept = selectModeCount(modes, selection);
+    const reached = modes[kept - 1].cumulativeMassRatio >= (selection.targetMassRatio ?? 1) - 1e-12;
+    // The first `kept` of a larger solve are exactly what solving for `kept` gives: each
+    // frequency's bisection stands alone, and inverse iteration only looks back at lower modes.
+    if (reached || count === n) return modes.slice(0, kept);
+  }
 }
 
 /** A = M^-1/2 K M^-1/2 as its diagonal a and off-diagonal b, and the square roots of the masses. */

@@ -43,20 +43,62 @@ export function shearBuildingFrequencies(
   const count = (sigma: number) => singularValuesBelow(squares, n, sigma);
   const ceiling = Math.sqrt(2 * norm) || 1;
   return estimates.map((estimate, j) => {
-    let [lo, hi] = bracket(estimate, j, norm, ceiling, count);
-    // Bisect: arithmetically where the bracket is narrow, geometrically where it spans more
-    // than a factor of two (each step then halves the exponent range), so a value far below the
-    // bracket's top still converges in relative terms. It stops at RELATIVE_WIDTH: the data's
-    // own rounding moves the values by more than the last few bisections would gain.
-    for (;;) {
-      if (hi - lo <= RELATIVE_WIDTH * lo) break;
-      const mid = lo === 0 ? hi * 1e-3 : hi > 2 * lo ? Math.sqrt(lo * hi) : lo + (hi - lo) / 2;
-      if (!(mid > lo && mid < hi)) break;
-      if (count(mid) > j) hi = mid;
-      else lo = mid;
-    }
-    return lo === 0 ? hi / 2 : lo + (hi - lo) / 2;
+    const [lo, hi] = bracket(estimate, j, norm, ceiling, count);
+    return middle(bisect(lo, hi, j, count));
   });
+}
+
+/**
+ * The lowest `modes` frequencies alone, omega_1 first, to the same relative accuracy, by
+ * bisection with Sturm counts from the bracket [omega_(j-1), sqrt(2 ||A||)], without solving for
+ * the others: what a truncated analysis needs (O(modes n) work where all modes take O(n^2)).
+ */
+export function lowestFrequencies(
+  storeys: readonly Storey[],
+  modes: number,
+  norm: number,
+): number[] {
+  const n = storeys.length;
+  const squares = golubKahanSquares(storeys);
+  const count = (sigma: number) => singularValuesBelow(squares, n, sigma);
+  const ceiling = Math.sqrt(2 * norm) || 1;
+  const omegas: number[] = [];
+  // count(below) <= j holds: below is the lower end of omega_(j-1)'s final bracket, or zero.
+  let below = 0;
+  for (let j = 0; j < Math.min(modes, n); j += 1) {
+    const final = bisect(below, ceiling, j, count);
+    omegas.push(middle(final));
+    below = final[0];
+  }
+  return omegas;
+}
+
+/**
+ * The final bracket of sigma_j, from one with count(lo) <= j < count(hi). Bisects arithmetically where the
+ * bracket is narrow, geometrically where it spans more than a factor of two (each step then halves
+ * the exponent range), so a value far below the bracket's top still converges in relative terms.
+ * It stops at RELATIVE_WIDTH: the data's own rounding moves the values by more than the last few
+ * bisections would gain.
+ */
+function bisect(
+  lo: number,
+  hi: number,
+  j: number,
+  count: (sigma: number) => number,
+): [number, number] {
+  for (;;) {
+    if (hi - lo <= RELATIVE_WIDTH * lo) break;
+    const mid = lo === 0 ? hi * 1e-3 : hi > 2 * lo ? Math.sqrt(lo * hi) : lo + (hi - lo) / 2;
+    if (!(mid > lo && mid < hi)) break;
+    if (count(mid) > j) hi = mid;
+    else lo = mid;
+  }
+  return [lo, hi];
+}
+
+/** The value a final bracket stands for. */
+function middle([lo, hi]: [number, number]): number {
+  return lo === 0 ? hi / 2 : lo + (hi - lo) / 2;
 }
 
 /** The squared off-diagonals of the Golub-Kahan form: d_1^2, e_1^2, d_2^2, ..., d_n^2. */

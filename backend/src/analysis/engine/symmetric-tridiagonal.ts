@@ -151,7 +151,7 @@ export function tridiagonalEigenvectors(
   rootWeights?: readonly number[],
 ): Float64Array[] {
   const n = diagonal.length;
-  if (n === 1) return [Float64Array.of(1)];
+  if (n === 1) return values.map(() => Float64Array.of(1));
   const weights = Float64Array.from(rootWeights ?? diagonal.map(() => 1), (r) => r * r);
   const solverNorm = tridiagonalNorm(diagonal, offDiagonal);
   // The scale of the standard-form matrix that sets the cluster rule: its norm, or for a pencil
@@ -165,10 +165,11 @@ export function tridiagonalEigenvectors(
   // one large cluster and the work into O(n^3).)
   const clusterGap = 1e-6 * norm;
   const solver = new ShiftedTridiagonalSolver(diagonal, offDiagonal, weights, solverNorm);
-  const block = new Float64Array(n * n);
+  // One vector per value given: all n, or the lowest few of a truncated analysis.
+  const block = new Float64Array(values.length * n);
   const vectors: Float64Array[] = [];
   let clusterStart = 0;
-  for (let j = 0; j < n; j += 1) {
+  for (let j = 0; j < values.length; j += 1) {
     if (j > 0 && values[j] - values[j - 1] > clusterGap) clusterStart = j;
     // Perturb equal eigenvalues apart so each gets its own vector (dstein does the same).
     const shift =

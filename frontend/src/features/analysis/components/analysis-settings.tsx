@@ -1,5 +1,10 @@
 import { MenuItem, Stack, TextField } from '@mui/material';
-import type { AnalysisInputsState } from '../model/use-analysis-inputs';
+import {
+  MASS_TARGETS,
+  modeChoiceValue,
+  parseModeChoice,
+  type AnalysisInputsState,
+} from '../model/use-analysis-inputs';
 
 /** Damping and the number of modes combined, under the storey table. */
 export function AnalysisSettings({
@@ -26,11 +31,16 @@ export function AnalysisSettings({
         label="Modes combined"
         size="small"
         sx={{ minWidth: 180 }}
-        value={String(modeCount)}
+        value={modeChoiceValue(modeCount)}
         disabled={readOnly}
-        onChange={(e) => setModeCount(e.target.value === 'all' ? 'all' : Number(e.target.value))}
+        onChange={(e) => setModeCount(parseModeChoice(e.target.value))}
       >
         <MenuItem value="all">All {rows.length}</MenuItem>
+        {MASS_TARGETS.map((ratio) => (
+          <MenuItem key={ratio} value={`mass-${ratio}`}>
+            Fewest reaching {Math.round(ratio * 100)}% of the mass
+          </MenuItem>
+        ))}
         {Array.from({ length: Math.min(rows.length - 1, 30) }, (_, i) => (
           <MenuItem key={i + 1} value={String(i + 1)}>
             First {i + 1}

@@ -7,7 +7,33 @@ import {
 import { useCallback, useMemo, useState } from 'react';
 import { fromStoreyInputs, storeyProblems, toStoreyInputs, type StoreyRow } from './storey-rows';
 
-export type ModeCountChoice = 'all' | number;
+/**
+ * Which modes are combined: all (the default), the first n, or the fewest whose cumulative
+ * effective mass reaches a fraction of the total (only those are solved then).
+ */
+export type ModeCountChoice = 'all' | number | { targetMassRatio: number };
+
+/** The mass targets offered: 90% is EN 1998-1 4.3.3.3.1(3)'s rule, the others stricter. */
+export const MASS_TARGETS = [0.9, 0.95, 0.99] as const;
+
+/** The choice as the select holds it, and back. */
+export const modeChoiceValue = (choice: ModeCountChoice): string =>
+  typeof choice === 'object' ? `mass-${choice.targetMassRatio}` : String(choice);
+export function parseModeChoice(value: string): ModeCountChoice {
+  if (value === 'all') return 'all';
+  if (value.startsWith('mass-')) return { targetMassRatio: Number(value.slice(5)) };
+  return Number(value);
+}
+
+function choiceOf(inputs: AnalysisRequest): ModeCountChoice {
+  if (inputs.targetMassRatio !== undefined) return { targetMassRatio: inputs.targetMassRatio };
+  return inputs.modeCount ?? 'all';
+}
+
+function selectionOf(choice: ModeCountChoice, storeys: number) {
+  if (typeof choice === 'object') return { targetMassRatio: choice.targetMassRatio };
+  return choice !== 'all' && choice <= storeys ? { modeCount: choice } : {};
+}
 
 /** Everything a designer edits for one analysis, as the screens hold it. */
 export interface AnalysisInputsState {
@@ -40,7 +66,7 @@ export function useAnalysisInputs(initial: AnalysisRequest): AnalysisInputsState
   const [rows, setRows] = useState<StoreyRow[]>(() => fromStoreyInputs(initial.storeys));
   const [spectrum, setSpectrum] = useState<SpectrumInput>(initial.spectrum);
   const [damping, setDamping] = useState(() => percent(initial.dampingRatio));
-  const [modeCount, setModeCount] = useState<ModeCountChoice>(initial.modeCount ?? 'all');
+  const [modeCount, setModeCount] = useState<ModeCountChoice>(() => choiceOf(initial));
 
   const dampingRatio = Number(damping) / 100;
   const dampingProblem =
@@ -54,7 +80,7 @@ export function useAnalysisInputs(initial: AnalysisRequest): AnalysisInputsState
       storeys: toStoreyInputs(rows),
       spectrum,
       dampingRatio,
-      ...(modeCount !== 'all' && modeCount <= rows.length ? { modeCount } : {}),
+      ...selectionOf(modeCount, rows.length),
     };
   }, [rows, spectrum, dampingRatio, dampingProblem, modeCount]);
 
@@ -62,7 +88,7 @@ export function useAnalysisInputs(initial: AnalysisRequest): AnalysisInputsState
     setRows(fromStoreyInputs(inputs.storeys));
     setSpectrum(inputs.spectrum);
     setDamping(percent(inputs.dampingRatio));
-    setModeCount(inputs.modeCount ?? 'all');
+    setModeCount(choiceOf(inputs));
   }, []);
 
   return {
