@@ -21,7 +21,13 @@ describe('The load run, as a smoke test', () => {
   it('answers every request of the mixed workload (sign-in, lists, calcs, analyses) with a 2xx', async () => {
     const report = await runLoad(server.url, { duration: 3, connections: 10 });
     console.log(formatReport(report));
-    for (const phase of [report.health, report.workload, report.signIn]) {
+    // The analysis phases too: 20 storeys whole and lean, 200 storeys lean.
+    expect(report.analysis.map((a) => `${a.storeys} ${a.detail}`)).toEqual([
+      '20 full',
+      '20 summary',
+      '200 summary',
+    ]);
+    for (const phase of [report.health, ...report.analysis, report.workload, report.signIn]) {
       expect(phase.errors).toBe(0);
       expect(Object.keys(phase.statusCounts)).toEqual(['200']);
       expect(phase.p99Ms).toBeGreaterThanOrEqual(phase.p50Ms);
@@ -30,6 +36,7 @@ describe('The load run, as a smoke test', () => {
     expect(report.workload.requests).toBeGreaterThanOrEqual(12);
     expect(report.signIn.requests).toBeGreaterThanOrEqual(1);
     expect(report.throughputRatio).toBeGreaterThan(0);
+    for (const phase of report.analysis) expect(phase.ratio).toBeGreaterThan(0);
     expect(formatReport(report)).toMatch(
       /throughput ratio, workload \+ sign-in over \/api\/health/,
     );
