@@ -1,6 +1,10 @@
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
-import type { CalculationDto, CalculationExport } from '@tiermode/shared-types';
+import type {
+  CalculationDto,
+  CalculationExport,
+  WholeCalculationDto,
+} from '@tiermode/shared-types';
 import { ASCE_BASIS, binaryBody, sampleInputs, useSignedInApp } from './support/fixtures';
 
 const { http, as } = useSignedInApp();
@@ -200,7 +204,12 @@ describe('Exports', () => {
       .expect(200);
     const doc = exported.body as CalculationExport;
     expect(doc).toMatchObject({ format: 'tiermode-calculation', formatVersion: 1 });
-    expect(doc.calculation.analysis).toEqual(calc.analysis);
+    // The file of record carries the whole analysis, per-mode vectors and rho included.
+    const whole = (
+      await http().get(`/api/calculations/${calc.id}?detail=full`).set(as('designer')).expect(200)
+    ).body as WholeCalculationDto;
+    expect(doc.calculation.analysis).toEqual(whole.analysis);
+    expect(doc.calculation.analysis?.correlation).toHaveLength(3);
     const imported = await http()
       .post(`/api/projects/${projectId}/calculations/import`)
       .set(as('designer'))
