@@ -349,6 +349,16 @@ const MATRIX: Cell[] = [
         .set(as(c)),
   },
   {
+    // The matrix's calcs keep no response history: allowed callers learn that (404), others 403.
+    route: 'GET /api/calculations/:id/history-results',
+    allowed: everyone,
+    ok: 404,
+    call: async (c) =>
+      http()
+        .get(`/api/calculations/${await locked()}/history-results`)
+        .set(as(c)),
+  },
+  {
     route: 'GET /api/calculations/:id/changes (returned)',
     allowed: staff,
     ok: 200,

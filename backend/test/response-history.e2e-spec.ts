@@ -8,8 +8,10 @@ import type {
   RecordImportResponse,
   RecordSpectrumResponse,
   ResponseHistoryResponse,
+  ResponseHistoryResult,
   ResponseHistorySetup,
   SealCheckResponse,
+  WholeCalculationDto,
 } from '@tiermode/shared-types';
 import { pdfText } from './support/pdf-text';
 import { binaryBody, calcInState, sampleInputs, useSignedInApp } from './support/fixtures';
@@ -316,13 +318,29 @@ describe("A calc's response history", () => {
   it('is stored as an input, made by analyse, and shown with the calc', async () => {
     const calc = await withHistory('History stored');
     expect(calc.history!.record.origin).toBe('demo');
-    expect(calc.historyResults).toBeNull();
+    expect(calc.hasHistoryResults).toBe(false);
+    await http()
+      .get(`/api/calculations/${calc.id}/history-results`)
+      .set(as('designer'))
+      .expect(404);
     expect(calc.analysisStale).toBe(true);
     await http().post(`/api/calculations/${calc.id}/analyse`).set(as('designer')).expect(200);
     const stored = (
       await http().get(`/api/calculations/${calc.id}`).set(as('designer')).expect(200)
     ).body as CalculationDto;
-    const results = stored.historyResults!;
+    // The calc says it keeps results; they come on their own route (they are most of its size).
+    expect(stored.hasHistoryResults).toBe(true);
+    expect(stored).not.toHaveProperty('historyResults');
+    const results = (
+      await http()
+        .get(`/api/calculations/${calc.id}/history-results`)
+        .set(as('designer'))
+        .expect(200)
+    ).body as ResponseHistoryResult;
+    const whole = (
+      await http().get(`/api/calculations/${calc.id}?detail=full`).set(as('designer')).expect(200)
+    ).body as WholeCalculationDto;
+    expect(whole.historyResults).toEqual(results);
     expect(results.scaling.explanation).toContain('mean over 0.1 s to 1.5 s');
     expect(results.response.peaks.displacement).toHaveLength(sampleInputs().storeys.length);
     expect(results.response.scale).toBe(results.scaling.factor);
@@ -439,7 +457,7 @@ describe("A calc's response history", () => {
       await http().post(`/api/calculations/${calc.id}/revise`).set(as('designer')).expect(201)
     ).body as CalculationDto;
     expect(next.history).toEqual(calc.history);
-    expect(next.historyResults).toBeNull();
+    expect(next.hasHistoryResults).toBe(false);
   });
 
   it('shows the reviewer what changed in it since the submission returned', async () => {

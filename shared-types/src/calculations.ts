@@ -38,8 +38,11 @@ export interface CalculationDto {
   analysis: AnalysisSummary | null;
   /** The ground-motion record and how it is scaled, and the free vibration's start; or null. */
   history: ResponseHistorySetup | null;
-  /** The response history made with the stored analysis (sealed with it), or null. */
-  historyResults: ResponseHistoryResult | null;
+  /**
+   * True when the calc keeps a response history made with the stored analysis (sealed with it):
+   * `GET /api/calculations/:id/history-results` has it (its histories are most of a calc's size).
+   */
+  hasHistoryResults: boolean;
   engineVersion: string | null;
   /** ISO times. */
   inputsChangedAt: string;
@@ -286,11 +289,13 @@ export interface CalculationExport {
 }
 
 /**
- * A calc with its whole stored analysis (`GET /api/calculations/:id?detail=full`): what the
+ * A calc with its whole stored analysis and response history (`GET /api/calculations/:id?detail=full`): what the
  * exports, the calc package and the seal work from.
  */
 export type WholeCalculationDto = Omit<CalculationDto, 'analysis'> & {
   analysis: AnalysisResponse | null;
+  /** The response history made with the stored analysis (sealed with it), or null. */
+  historyResults: ResponseHistoryResult | null;
 };
 
 /** `GET /api/calculations/:id`: the summary by default, the whole with `detail=full`. */

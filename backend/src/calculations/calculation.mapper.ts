@@ -22,7 +22,7 @@ export function toCalculationDto(calc: Calculation): CalculationDto {
     basis: calc.basis,
     checks: calc.checks,
     history: calc.history,
-    historyResults: calc.historyResults,
+    hasHistoryResults: calc.historyResults !== null,
     // The summary: the per-mode storey vectors and rho are GET .../modal-responses.
     analysis: calc.analysis ? summariseAnalysis(calc.analysis) : null,
     engineVersion: calc.engineVersion,

@@ -17,6 +17,7 @@ import type {
   CalculationChanges,
   CalculationDto,
   ModalDetail,
+  ResponseHistoryResult,
   SealCheckResponse,
 } from '@tiermode/shared-types';
 import { analysisAnswer, parseAnalysisDetail } from '../analysis/analysis-detail';
@@ -131,6 +132,20 @@ export class CalculationsController {
     @Param('id', UuidParam('id')) id: string,
   ): Promise<ModalDetail> {
     return this.calculations.modalDetail(ability, id);
+  }
+
+  @ApiContract({
+    summary:
+      "The calc's response history results: peaks, histories for display, the record's spectrum",
+    returns: 'ResponseHistoryResult',
+  })
+  @Get('calculations/:id/history-results')
+  @CheckPolicies((ability) => ability.can('read', 'Calculation'))
+  historyResults(
+    @CurrentAbility() ability: AppAbility,
+    @Param('id', UuidParam('id')) id: string,
+  ): Promise<ResponseHistoryResult> {
+    return this.calculations.historyResults(ability, id);
   }
 
   @ApiContract({ summary: 'Submit an analysed draft for review', returns: 'CalculationDto' })

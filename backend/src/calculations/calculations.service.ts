@@ -20,6 +20,7 @@ import {
   inputChanges,
   modalDetailOf,
   type ModalDetail,
+  type ResponseHistoryResult,
   type WholeCalculationDto,
   type AnalysisRequest,
   type AnalysisResponse,
@@ -183,7 +184,11 @@ export class CalculationsService {
       'read',
       subject('Calculation', calculationSubject(calc)),
     );
-    return { ...toCalculationDto(calc), analysis: calc.analysis };
+    return {
+      ...toCalculationDto(calc),
+      analysis: calc.analysis,
+      historyResults: calc.historyResults,
+    };
   }
 
   async update(
@@ -289,6 +294,19 @@ export class CalculationsService {
     );
     if (!calc.analysis) throw new NotFoundException('This calculation has not been analysed yet');
     return modalDetailOf(calc.analysis);
+  }
+
+  /** The response history kept with the calc (most of a calc's size, so not in its DTO). */
+  async historyResults(ability: AppAbility, id: string): Promise<ResponseHistoryResult> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    if (!calc.historyResults) {
+      throw new NotFoundException('This calculation keeps no response history results');
+    }
+    return calc.historyResults;
   }
 
   /** Designer: send a draft whose stored analysis matches its inputs to review. */

@@ -37,6 +37,7 @@ export interface ContractTypes {
   RecordSpectrumResponse: C.RecordSpectrumResponse;
   ResponseHistoryRequest: C.ResponseHistoryRequest;
   ResponseHistoryResponse: C.ResponseHistoryResponse;
+  ResponseHistoryResult: C.ResponseHistoryResult;
   HealthResponse: C.HealthResponse;
   LibraryEntryDto: C.LibraryEntryDto;
   ModalDetail: C.ModalDetail;

@@ -21,7 +21,7 @@ export function DownloadsMenu({ calc, units }: { calc: CalculationDto; units: Un
   const [failure, setFailure] = useState<string | null>(null);
   const analysed = calc.analysis !== null;
   const designValues = analysed && calc.checks?.design !== undefined && !calc.analysisStale;
-  const historyPeaks = analysed && calc.historyResults !== null && !calc.analysisStale;
+  const historyPeaks = analysed && calc.hasHistoryResults && !calc.analysisStale;
   const items: {
     label: string;
     path: string;

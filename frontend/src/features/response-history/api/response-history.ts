@@ -10,8 +10,23 @@ import type {
   RecordSpectrumResponse,
   ResponseHistoryRequest,
   ResponseHistoryResponse,
+  ResponseHistoryResult,
 } from '@tiermode/shared-types';
 import { api } from '@/lib/api-client';
+
+/**
+ * The response history a calc keeps (its own route: the histories are most of a calc's size),
+ * named by the time it was analysed, so a new analysis fetches anew.
+ */
+export function useStoredHistoryResults(id: string, kept: boolean, analysedAt: string | null) {
+  return useQuery({
+    queryKey: ['calculation', id, 'history-results', analysedAt],
+    queryFn: async () =>
+      (await api.get<ResponseHistoryResult>(`/calculations/${id}/history-results`)).data,
+    enabled: kept,
+    staleTime: Infinity,
+  });
+}
 
 /** The built-in invented demo record. */
 export function useDemoRecord(enabled: boolean) {

@@ -1,4 +1,12 @@
-import { Alert, Button, FormControlLabel, Stack, Switch, Typography } from '@mui/material';
+import {
+  Alert,
+  Button,
+  FormControlLabel,
+  LinearProgress,
+  Stack,
+  Switch,
+  Typography,
+} from '@mui/material';
 import {
   defaultScalingRange,
   formatDateTime,
@@ -12,6 +20,8 @@ import { useEffect, useState } from 'react';
 import { Section } from '@/components/layouts/section';
 import { sameJson } from '@/lib/same-json';
 import type { UnitSystem } from '@/lib/units';
+import { errorMessages } from '@/lib/api-client';
+import { useStoredHistoryResults } from '../api/response-history';
 import { DEFAULT_FREE_VIBRATION } from '../model/history-model';
 import { FreeVibrationPanel } from './free-vibration-panel';
 import { HistoryResults } from './history-results';
@@ -74,8 +84,9 @@ export function ResponseHistoryTab({
     : null;
   const dirty = editable && draft !== null && !sameJson(draft, saved);
   useEffect(() => onDirtyChange(dirty), [dirty, onDirtyChange]);
-  const results = calc.historyResults;
-  const fresh = results !== null && !calc.analysisStale && analysis !== null;
+  const stored = useStoredHistoryResults(calc.id, calc.hasHistoryResults, calc.analysedAt);
+  const results = calc.hasHistoryResults ? (stored.data ?? null) : null;
+  const fresh = calc.hasHistoryResults && !calc.analysisStale && analysis !== null;
 
   return (
     <Stack spacing={2}>
@@ -178,9 +189,19 @@ export function ResponseHistoryTab({
         {!saved && <Alert severity="info">No record is kept with this calc.</Alert>}
         {saved && !fresh && (
           <Alert severity="warning" role="alert">
-            {results
+            {calc.hasHistoryResults
               ? `This response history is older than the inputs or the record (analysed ${formatDateTime(calc.analysedAt, '')}): analyse again before relying on it.`
               : 'Not made yet: analyse the calc to make the response history.'}
+          </Alert>
+        )}
+        {saved && fresh && stored.isPending && (
+          <LinearProgress aria-label="Fetching the response history" />
+        )}
+        {saved && fresh && stored.isError && (
+          <Alert severity="error" role="alert">
+            {errorMessages(stored.error).map((m) => (
+              <div key={m}>{m}</div>
+            ))}
           </Alert>
         )}
         {saved && results && analysis && fresh && (
