@@ -115,21 +115,25 @@ describe('Tokens', () => {
     await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
   });
 
-  it('refuses a well-signed token once the user is deactivated, on the very next request', async () => {
+  /** A designer the admin has just added, signed in: the admin's token, the user, its token. */
+  async function newDesigner(email: string, name: string, password: string) {
     const adminToken = (await login('admin@tiermode.test', 'tiermode-demo').expect(200)).body
       .accessToken as string;
     const made = await http()
       .post('/api/users')
       .set('Authorization', `Bearer ${adminToken}`)
-      .send({
-        email: 'leaver@tiermode.test',
-        name: 'Lee Leaver',
-        role: 'designer',
-        password: 'leaving-soon-2026',
-      })
+      .send({ email, name, role: 'designer', password })
       .expect(201);
-    const token = (await login('leaver@tiermode.test', 'leaving-soon-2026').expect(200)).body
-      .accessToken as string;
+    const token = (await login(email, password).expect(200)).body.accessToken as string;
+    return { adminToken, made, token };
+  }
+
+  it('refuses a well-signed token once the user is deactivated, on the very next request', async () => {
+    const { adminToken, made, token } = await newDesigner(
+      'leaver@tiermode.test',
+      'Lee Leaver',
+      'leaving-soon-2026',
+    );
     await http().get('/api/projects').set('Authorization', `Bearer ${token}`).expect(200);
     await http()
       .patch(`/api/users/${made.body.id}`)
@@ -144,20 +148,11 @@ describe('Tokens', () => {
   });
 
   it('applies a role change and a sign-out on the very next request, though the user is kept in memory', async () => {
-    const adminToken = (await login('admin@tiermode.test', 'tiermode-demo').expect(200)).body
-      .accessToken as string;
-    const made = await http()
-      .post('/api/users')
-      .set('Authorization', `Bearer ${adminToken}`)
-      .send({
-        email: 'mover@tiermode.test',
-        name: 'Mo Mover',
-        role: 'designer',
-        password: 'moving-desks-2026',
-      })
-      .expect(201);
-    const token = (await login('mover@tiermode.test', 'moving-desks-2026').expect(200)).body
-      .accessToken as string;
+    const { adminToken, made, token } = await newDesigner(
+      'mover@tiermode.test',
+      'Mo Mover',
+      'moving-desks-2026',
+    );
     const bearer = { Authorization: `Bearer ${token}` };
     // Twice, so the second is answered from the row kept since the first.
     await http().post('/api/projects').set(bearer).send({ name: 'Mine' }).expect(201);

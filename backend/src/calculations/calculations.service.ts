@@ -169,21 +169,13 @@ export class CalculationsService {
   }
 
   async get(ability: AppAbility, id: string): Promise<CalculationDto> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     return toCalculationDto(calc);
   }
 
   /** The calc with its whole stored analysis (exports, the calc package, `?detail=full`). */
   async getWhole(ability: AppAbility, id: string): Promise<WholeCalculationDto> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     return {
       ...toCalculationDto(calc),
       analysis: calc.analysis,
@@ -287,22 +279,14 @@ export class CalculationsService {
 
   /** What the calc's summary leaves out of its stored analysis (per-mode responses, rho). */
   async modalDetail(ability: AppAbility, id: string): Promise<ModalDetail> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     if (!calc.analysis) throw new NotFoundException('This calculation has not been analysed yet');
     return modalDetailOf(calc.analysis);
   }
 
   /** The response history kept with the calc (most of a calc's size, so not in its DTO). */
   async historyResults(ability: AppAbility, id: string): Promise<ResponseHistoryResult> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     if (!calc.historyResults) {
       throw new NotFoundException('This calculation keeps no response history results');
     }
@@ -539,11 +523,7 @@ export class CalculationsService {
     id: string,
     since: 'submission' | 'revision',
   ): Promise<CalculationChanges> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     const now = { inputs: calc.inputs, basis: calc.basis, history: calc.history };
     if (since === 'submission') {
       // The submission the reviewer returned; a first submission has none yet.
@@ -591,21 +571,13 @@ export class CalculationsService {
 
   /** The audit trail of one calculation. */
   async history(ability: AppAbility, id: string) {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     return this.audit.historyOf(calc.id);
   }
 
   /** Recomputes the seal from what is stored: a changed row shows valid: false. */
   async checkSeal(ability: AppAbility, id: string): Promise<SealCheckResponse> {
-    const calc = await this.load(id);
-    ForbiddenError.from(ability).throwUnlessCan(
-      'read',
-      subject('Calculation', calculationSubject(calc)),
-    );
+    const calc = await this.loadReadable(ability, id);
     const { seal } = calc;
     if (!seal) throw new NotFoundException('This calculation is not locked, so it has no seal');
     const content = sealedContentOf(calc, seal);
@@ -684,6 +656,16 @@ export class CalculationsService {
         'You wrote, edited, analysed or submitted a revision of this calculation, so you cannot lock it: the lock must come from an independent reviewer',
       );
     }
+  }
+
+  /** The calculation, where the caller may read it (403 otherwise, 404 when there is none). */
+  private async loadReadable(ability: AppAbility, id: string): Promise<Calculation> {
+    const calc = await this.load(id);
+    ForbiddenError.from(ability).throwUnlessCan(
+      'read',
+      subject('Calculation', calculationSubject(calc)),
+    );
+    return calc;
   }
 
   private async load(id: string): Promise<Calculation> {

@@ -38,10 +38,7 @@ export function shearBuildingFrequencies(
   estimates: readonly number[],
   norm: number,
 ): number[] {
-  const n = storeys.length;
-  const squares = golubKahanSquares(storeys);
-  const count = (sigma: number) => singularValuesBelow(squares, n, sigma);
-  const ceiling = Math.sqrt(2 * norm) || 1;
+  const { count, ceiling } = sturmCounts(storeys, norm);
   return estimates.map((estimate, j) => {
     const [lo, hi] = bracket(estimate, j, norm, ceiling, count);
     return middle(bisect(lo, hi, j, count));
@@ -59,9 +56,7 @@ export function lowestFrequencies(
   norm: number,
 ): number[] {
   const n = storeys.length;
-  const squares = golubKahanSquares(storeys);
-  const count = (sigma: number) => singularValuesBelow(squares, n, sigma);
-  const ceiling = Math.sqrt(2 * norm) || 1;
+  const { count, ceiling } = sturmCounts(storeys, norm);
   const omegas: number[] = [];
   // count(below) <= j holds: below is the lower end of omega_(j-1)'s final bracket, or zero.
   let below = 0;
@@ -99,6 +94,19 @@ function bisect(
 /** The value a final bracket stands for. */
 function middle([lo, hi]: [number, number]): number {
   return lo === 0 ? hi / 2 : lo + (hi - lo) / 2;
+}
+
+/**
+ * The Sturm count of the building's frequencies below sigma, and sqrt(2 ||A||), above them all
+ * (Gershgorin: every omega^2 is at most ||A||_inf).
+ */
+function sturmCounts(storeys: readonly Storey[], norm: number) {
+  const n = storeys.length;
+  const squares = golubKahanSquares(storeys);
+  return {
+    count: (sigma: number) => singularValuesBelow(squares, n, sigma),
+    ceiling: Math.sqrt(2 * norm) || 1,
+  };
 }
 
 /** The squared off-diagonals of the Golub-Kahan form: d_1^2, e_1^2, d_2^2, ..., d_n^2. */

@@ -37,3 +37,16 @@ export function uniformFrequencies(n: number, mass: number, stiffness: number): 
       2 * Math.sqrt(stiffness / mass) * Math.sin(((2 * j + 1) * Math.PI) / (2 * (2 * n + 1))),
   );
 }
+
+/**
+ * An ill-conditioned building: storey values drawn log-uniformly over `ratio`, so neighbours
+ * differ by up to that factor in mass and in stiffness.
+ */
+export function contrastedBuilding(n: number, ratio: number, seed: number): Storey[] {
+  const random = seededRandom(seed);
+  return Array.from({ length: n }, () => ({
+    mass: 1e4 * ratio ** random(),
+    stiffness: 1e7 * ratio ** random(),
+    height: 3,
+  }));
+}

@@ -1,7 +1,7 @@
 import { analyse } from '../analyse';
 import { naturalModes } from '../modes';
 import type { Storey } from '../shear-building';
-import { seededRandom, uniformBuilding } from './buildings';
+import { contrastedBuilding, uniformBuilding } from './buildings';
 import { referenceOmega } from '../../../verification/sturm-reference';
 
 // The reference (referenceOmega) is independent of the engine's route: 60-digit Sturm bisection
@@ -16,16 +16,6 @@ function expectPeriodsToMatch(storeys: readonly Storey[], which?: number[]): voi
     if (!(error < 1e-9)) throw new Error(`mode ${j + 1}: relative error ${error}`);
     expect(error).toBeLessThan(1e-9);
   }
-}
-
-/** Storey values drawn log-uniformly over `ratio`: neighbours differ by up to that factor. */
-function contrastedBuilding(n: number, ratio: number, seed: number): Storey[] {
-  const random = seededRandom(seed);
-  return Array.from({ length: n }, () => ({
-    mass: 1e4 * ratio ** random(),
-    stiffness: 1e7 * ratio ** random(),
-    height: 3,
-  }));
 }
 
 describe('periods of ill-conditioned buildings to 1e-9 (60-digit Sturm bisection reference)', () => {

@@ -2,8 +2,13 @@ import type { AnalysisRequest } from '@tiermode/shared-types';
 import { referenceOmega } from '../../../verification/sturm-reference';
 import { analyse } from '../analyse';
 import { lowestModes, naturalModes, type Mode } from '../modes';
-import type { Storey } from '../shear-building';
-import { randomBuilding, seededRandom, uniformBuilding, uniformFrequencies } from './buildings';
+import {
+  contrastedBuilding,
+  randomBuilding,
+  seededRandom,
+  uniformBuilding,
+  uniformFrequencies,
+} from './buildings';
 
 // A truncated analysis solves only the modes it keeps (issue 16): bisection with Sturm counts
 // for each frequency, inverse iteration for each vector. What it gives must be what solving all
@@ -28,16 +33,6 @@ function expectSameModes(kept: readonly Mode[], all: readonly Mode[]): void {
       expect(Math.abs(value - full.shape[i])).toBeLessThan(1e-9 * largest);
     });
   });
-}
-
-/** Storey values drawn log-uniformly over `ratio`: neighbours differ by up to that factor. */
-function contrastedBuilding(n: number, ratio: number, seed: number): Storey[] {
-  const random = seededRandom(seed);
-  return Array.from({ length: n }, () => ({
-    mass: 1e4 * ratio ** random(),
-    stiffness: 1e7 * ratio ** random(),
-    height: 3,
-  }));
 }
 
 const SPECTRUM: AnalysisRequest['spectrum'] = {
