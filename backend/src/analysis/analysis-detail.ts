@@ -1,11 +1,5 @@
 import { BadRequestException } from '@nestjs/common';
-import {
-  ANALYSIS_DETAILS,
-  summariseAnalysis,
-  type AnalysisAnswer,
-  type AnalysisDetail,
-  type AnalysisResponse,
-} from '@tiermode/shared-types';
+import { ANALYSIS_DETAILS, type AnalysisDetail } from '@tiermode/shared-types';
 
 /**
  * The `detail` query parameter of a route that answers with an analysis, or the route's default
@@ -17,9 +11,4 @@ export function parseAnalysisDetail(value: unknown, fallback: AnalysisDetail): A
     return value as AnalysisDetail;
   }
   throw new BadRequestException([`detail must be one of ${ANALYSIS_DETAILS.join(', ')}`]);
-}
-
-/** The analysis as much as the caller asked for. */
-export function analysisAnswer(full: AnalysisResponse, detail: AnalysisDetail): AnalysisAnswer {
-  return detail === 'full' ? full : summariseAnalysis(full);
 }

@@ -1,6 +1,7 @@
 import { Body, Controller, HttpCode, Post, Query } from '@nestjs/common';
 import type { AnalysisAnswer, ColumnStiffnessResponse } from '@tiermode/shared-types';
-import { analysisAnswer, parseAnalysisDetail } from './analysis-detail';
+import { JsonAnswer } from '../common/json-answer';
+import { parseAnalysisDetail } from './analysis-detail';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
 import { AnalysisRequestDto } from './dto/analysis-request.dto';
@@ -24,10 +25,13 @@ export class AnalysisController {
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  run(@Body() body: AnalysisRequestDto, @Query('detail') detail?: unknown): AnalysisAnswer {
+  async run(
+    @Body() body: AnalysisRequestDto,
+    @Query('detail') detail?: unknown,
+  ): Promise<JsonAnswer<AnalysisAnswer>> {
     // The whole answer stays the default: api-contract.md fixes its fields for outside callers.
     const wanted = parseAnalysisDetail(detail, 'full');
-    return analysisAnswer(this.analysis.analyse(body), wanted);
+    return new JsonAnswer(await this.analysis.answerJson(body, wanted));
   }
 
   /** A storey's lateral stiffness from its columns, for the storey table's helper. */

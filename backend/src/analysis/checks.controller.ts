@@ -2,6 +2,7 @@ import { Body, Controller, HttpCode, Post } from '@nestjs/common';
 import type { ChecksResponse } from '@tiermode/shared-types';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { AnalysisService } from './analysis.service';
+import { JsonAnswer } from '../common/json-answer';
 import { ChecksRequestDto } from './dto/checks-request.dto';
 import { ApiContract } from '../openapi/api-contract.decorator';
 import { Expensive } from '../rate-limit/expensive.decorator';
@@ -20,7 +21,7 @@ export class ChecksController {
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  run(@Body() body: ChecksRequestDto): ChecksResponse {
-    return this.analysis.checks(body);
+  async run(@Body() body: ChecksRequestDto): Promise<JsonAnswer<ChecksResponse>> {
+    return new JsonAnswer(await this.analysis.checksJson(body));
   }
 }

@@ -8,12 +8,10 @@ import type {
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { ApiContract } from '../openapi/api-contract.decorator';
 import { Expensive } from '../rate-limit/expensive.decorator';
-import { asBadRequest } from './analysis.service';
+import { JsonAnswer } from '../common/json-answer';
+import { AnalysisService } from './analysis.service';
 import { FreeVibrationDto, RecordSpectrumDto, ResponseHistoryDto } from './dto/history.dto';
-import { freeVibration } from './engine/history/free-vibration';
 import { demoRecord, DEMO_RECORD_DESCRIPTION } from './engine/history/record';
-import { recordSpectrum } from './engine/history/record-spectrum';
-import { responseHistory } from './engine/history/response-history';
 
 /**
  * Response history, stateless (any signed-in user; nothing is stored): free vibration, the
@@ -22,6 +20,8 @@ import { responseHistory } from './engine/history/response-history';
  */
 @Controller()
 export class HistoryController {
+  constructor(private readonly analysis: AnalysisService) {}
+
   @ApiContract({
     summary: 'Free vibration: the exact sum of the damped modal responses',
     body: 'FreeVibrationRequest',
@@ -31,8 +31,8 @@ export class HistoryController {
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  freeVibration(@Body() body: FreeVibrationDto): FreeVibrationResponse {
-    return asBadRequest(() => freeVibration(body));
+  async freeVibration(@Body() body: FreeVibrationDto): Promise<JsonAnswer<FreeVibrationResponse>> {
+    return new JsonAnswer(await this.analysis.freeVibrationJson(body));
   }
 
   @ApiContract({
@@ -44,8 +44,10 @@ export class HistoryController {
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  responseHistory(@Body() body: ResponseHistoryDto): ResponseHistoryResponse {
-    return asBadRequest(() => responseHistory(body));
+  async responseHistory(
+    @Body() body: ResponseHistoryDto,
+  ): Promise<JsonAnswer<ResponseHistoryResponse>> {
+    return new JsonAnswer(await this.analysis.responseHistoryJson(body));
   }
 
   @ApiContract({
@@ -57,8 +59,10 @@ export class HistoryController {
   @Expensive()
   @HttpCode(200)
   @CheckPolicies((ability) => ability.can('create', 'Analysis'))
-  recordSpectrum(@Body() body: RecordSpectrumDto): RecordSpectrumResponse {
-    return asBadRequest(() => recordSpectrum(body));
+  async recordSpectrum(
+    @Body() body: RecordSpectrumDto,
+  ): Promise<JsonAnswer<RecordSpectrumResponse>> {
+    return new JsonAnswer(await this.analysis.recordSpectrumJson(body));
   }
 
   @ApiContract({

@@ -20,7 +20,8 @@ import type {
   ResponseHistoryResult,
   SealCheckResponse,
 } from '@tiermode/shared-types';
-import { analysisAnswer, parseAnalysisDetail } from '../analysis/analysis-detail';
+import { parseAnalysisDetail } from '../analysis/analysis-detail';
+import { analysisAnswer } from '../analysis/analysis-work';
 import type { AppAbility } from '../authorization/app-ability';
 import { CheckPolicies } from '../authorization/check-policies.decorator';
 import { CurrentAbility, CurrentUser } from '../authorization/current.decorators';

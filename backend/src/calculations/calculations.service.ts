@@ -256,14 +256,15 @@ export class CalculationsService {
   /** Runs the engine on the stored inputs and keeps the result with the engine version. */
   async analyse(ability: AppAbility, actor: User, id: string): Promise<AnalysisResponse> {
     const calc = await this.loadForWrite(ability, id, 'analyse');
-    // With a code basis, the checks are made from the same analysis and stored beside it.
-    const { analysis: result, checks } = calc.basis
-      ? this.analysis.analyseAndCheck({ ...calc.inputs, basis: calc.basis })
-      : { analysis: this.analysis.analyse(calc.inputs), checks: null };
-    // With a record, its response history is made beside the analysis and stored with it.
-    calc.historyResults = calc.history
-      ? this.analysis.responseHistoryOf(calc.inputs, calc.history)
-      : null;
+    // With a code basis, the checks are made from the same analysis and stored beside it; with
+    // a record, its response history. A change made meanwhile (a lock, say) fails the flush's
+    // version check: the analysis is not stored over it.
+    const {
+      analysis: result,
+      checks,
+      historyResults,
+    } = await this.analysis.calcResults(calc.inputs, calc.basis, calc.history);
+    calc.historyResults = historyResults;
     calc.analysis = result;
     calc.checks = checks;
     calc.engineVersion = result.engineVersion;

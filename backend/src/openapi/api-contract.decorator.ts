@@ -9,6 +9,7 @@ import {
   ApiResponse,
 } from '@nestjs/swagger';
 import type { ReferenceObject, SchemaObject } from '@nestjs/swagger';
+import type { JsonAnswer } from '../common/json-answer';
 import { contractRef, type ContractName, type ContractTypes } from './contract';
 import { contractSchemas } from './contract-schemas';
 
@@ -40,7 +41,8 @@ interface FileRoute {
   file: string;
 }
 
-type MethodOf<T> = (...args: never[]) => T | Promise<T>;
+/** A route method answering T, as a value or as its JSON already made (JsonAnswer). */
+type MethodOf<T> = (...args: never[]) => T | JsonAnswer<T> | Promise<T | JsonAnswer<T>>;
 
 /**
  * Documents a route in the OpenAPI document with the shared-types contract: a summary, the
