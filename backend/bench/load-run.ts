@@ -26,7 +26,9 @@ export interface PhaseSummary {
 export interface AnalysisPhase extends PhaseSummary {
   storeys: number;
   detail: 'summary' | 'full';
-  /** Its requests per second over /api/health's. */
+  /** /api/health's requests per second, run just before this phase. */
+  healthRequestsPerSecond: number;
+  /** Its requests per second over that. */
   ratio: number;
   /** Issue 16's target for the ratio, where it sets one. */
   targetRatio?: number;
@@ -127,11 +129,26 @@ export async function runLoad(baseUrl: string, options: LoadOptions): Promise<Lo
   }
 
   const common = { url: baseUrl, duration: options.duration, timeout: 10 };
-  const health = await run({
-    ...common,
-    connections: options.connections,
-    requests: [{ method: 'GET', path: '/api/health' }],
-  });
+  const healthRun = () =>
+    run({
+      ...common,
+      connections: options.connections,
+      requests: [{ method: 'GET', path: '/api/health' }],
+    });
+  const analysisRun = (storeys: number, detail: 'summary' | 'full', duration: number) =>
+    run({
+      ...common,
+      duration,
+      connections: options.connections,
+      requests: [
+        {
+          method: 'POST',
+          path: `/api/analysis?detail=${detail}`,
+          headers: { ...auth(designer), 'content-type': 'application/json' },
+          body: JSON.stringify(tower(storeys)),
+        },
+      ],
+    });
 
   // Each analysis phase: every connection posts the same building (issue 16's targets: 20 storeys
   // at 0.35 of /api/health or more, 200 storeys at 0.1, with no errors). The web app asks for the
@@ -141,28 +158,29 @@ export async function runLoad(baseUrl: string, options: LoadOptions): Promise<Lo
     { storeys: 20, detail: 'summary', target: 0.35 },
     { storeys: 200, detail: 'summary', target: 0.1 },
   ];
-  const healthRps = summarise(health).requestsPerSecond;
+  // Untimed first, so that no phase measures V8 compiling the code it runs.
+  const warmUp = Math.max(1, Math.round(options.duration / 5));
+  await run({
+    ...common,
+    duration: warmUp,
+    connections: options.connections,
+    requests: [{ method: 'GET', path: '/api/health' }],
+  });
+  for (const phase of analysisPhases) await analysisRun(phase.storeys, phase.detail, warmUp);
+
+  const health = await healthRun();
   const analysisResults: AnalysisPhase[] = [];
   for (const phase of analysisPhases) {
-    const result = summarise(
-      await run({
-        ...common,
-        connections: options.connections,
-        requests: [
-          {
-            method: 'POST',
-            path: `/api/analysis?detail=${phase.detail}`,
-            headers: { ...auth(designer), 'content-type': 'application/json' },
-            body: JSON.stringify(tower(phase.storeys)),
-          },
-        ],
-      }),
-    );
-    const ratio = Math.round((result.requestsPerSecond / healthRps) * 1000) / 1000;
+    // This machine's speed drifts from minute to minute (by up to a half between runs a few
+    // minutes apart), so each phase is measured against a yardstick run just before it.
+    const yardstick = summarise(await healthRun()).requestsPerSecond;
+    const result = summarise(await analysisRun(phase.storeys, phase.detail, options.duration));
+    const ratio = Math.round((result.requestsPerSecond / yardstick) * 1000) / 1000;
     analysisResults.push({
       ...result,
       storeys: phase.storeys,
       detail: phase.detail,
+      healthRequestsPerSecond: yardstick,
       ratio,
       ...(phase.target === undefined
         ? {}
@@ -234,7 +252,7 @@ export function formatReport(report: LoadReport): string {
     row('/api/health only (the yardstick)', report.health),
     ...report.analysis.map(
       (a) =>
-        `${row(`analyse ${a.storeys} storeys, ${a.detail}`, a)}   ratio ${a.ratio}${
+        `${row(`analyse ${a.storeys} storeys, ${a.detail}`, a)}   ratio ${a.ratio} of ${a.healthRequestsPerSecond}${
           a.targetRatio === undefined
             ? ''
             : ` (target >= ${a.targetRatio}: ${a.meetsTarget ? 'met' : 'NOT met'})`
