@@ -111,6 +111,25 @@ export default tseslint.config(
     },
   },
   {
+    // One place names the database driver; everything else works on any SQL driver (issue 17).
+    files: ['backend/**/*.ts'],
+    ignores: ['backend/src/mikro-orm.config.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['@mikro-orm/sqlite', '@mikro-orm/postgresql'],
+              message:
+                'Import MikroORM from @mikro-orm/knex (any SQL driver); only mikro-orm.config.ts names the driver.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['backend/src/analysis/engine/**/*.ts'],
     rules: {
       'no-restricted-imports': [

@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { ConfigService } from '@nestjs/config';
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM } from '@mikro-orm/knex';
 import type { CalculationDto } from '@tiermode/shared-types';
 import { binaryBody, sampleInputs, useSignedInApp, ONE_PAGE_PDF } from './support/fixtures';
 

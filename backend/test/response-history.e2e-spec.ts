@@ -1,4 +1,4 @@
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM } from '@mikro-orm/knex';
 import type {
   AuditEventDto,
   CalculationChanges,

@@ -3,7 +3,7 @@ import { createPublicKey, verify } from 'node:crypto';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM } from '@mikro-orm/knex';
 import type {
   AuditVerifyResponse,
   SealCheckResponse,

@@ -1,7 +1,8 @@
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM } from '@mikro-orm/knex';
+import type { SqlOrm } from '../src/database/sql-orm';
 import { prepareDatabase } from '../src/database/prepare-database';
 import { createOrmConfig } from '../src/mikro-orm.config';
 import { AuditEvent } from '../src/audit/audit-event.entity';
@@ -14,10 +15,10 @@ import { AuditHead } from '../src/audit/audit-head';
 import { loadEnvironment } from '../src/config/environment';
 import { SigningKey } from '../src/signing/signing-key';
 
-const signings = new WeakMap<MikroORM, { key: SigningKey; head: AuditHead }>();
+const signings = new WeakMap<SqlOrm, { key: SigningKey; head: AuditHead }>();
 
 /** A fresh database, with a seal key and chain head of its own beside it. */
-async function freshOrm(): Promise<MikroORM> {
+async function freshOrm(): Promise<SqlOrm> {
   const dir = mkdtempSync(join(tmpdir(), 'tiermode-seed-'));
   const env = loadEnvironment({
     DATABASE_PATH: join(dir, 'db.sqlite'),
@@ -29,7 +30,7 @@ async function freshOrm(): Promise<MikroORM> {
   return orm;
 }
 
-const signingOf = (orm: MikroORM) => signings.get(orm)!;
+const signingOf = (orm: SqlOrm) => signings.get(orm)!;
 
 describe('Migrations and seeding', () => {
   it('migrates an empty database, seeds the four demo accounts once, and is safe to rerun', async () => {

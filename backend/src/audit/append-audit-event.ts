@@ -1,4 +1,4 @@
-import type { EntityManager } from '@mikro-orm/sqlite';
+import type { EntityManager } from '@mikro-orm/knex';
 import { AuditEvent } from './audit-event.entity';
 import type { SigningKey } from '../signing/signing-key';
 import { auditHash, GENESIS_HASH } from './audit-hash';

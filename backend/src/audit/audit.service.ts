@@ -1,4 +1,4 @@
-import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/sqlite';
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/knex';
 import { ConflictException, Injectable } from '@nestjs/common';
 import type { AuditEventDto, AuditVerifyResponse } from '@tiermode/shared-types';
 import { appendAuditEvent, type AuditEntry } from './append-audit-event';

@@ -7,7 +7,7 @@ import {
   type FlushEventArgs,
   type TransactionEventArgs,
 } from '@mikro-orm/core';
-import { EntityManager } from '@mikro-orm/sqlite';
+import { EntityManager } from '@mikro-orm/knex';
 import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { User } from '../users/user.entity';
 

@@ -1,5 +1,5 @@
 import { subject } from '@casl/ability';
-import { EntityManager, type FilterQuery } from '@mikro-orm/sqlite';
+import { EntityManager, type FilterQuery } from '@mikro-orm/knex';
 import { Injectable } from '@nestjs/common';
 import type { CalculationSummaryDto, LibraryEntryDto } from '@tiermode/shared-types';
 import { accessibleWhere } from '../authorization/accessible-where';

@@ -4,7 +4,7 @@ import {
   LockMode,
   OptimisticLockError,
   UniqueConstraintViolationException,
-} from '@mikro-orm/sqlite';
+} from '@mikro-orm/knex';
 import {
   BadRequestException,
   ConflictException,

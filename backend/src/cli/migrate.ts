@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM } from '@mikro-orm/knex';
 import { loadEnvironment } from '../config/environment';
 import { AuditHead } from '../audit/audit-head';
 import { prepareDatabase } from '../database/prepare-database';

@@ -1,4 +1,4 @@
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM, type AbstractSqlDriver, type EntityManager } from '@mikro-orm/knex';
 import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { AppEnvironment } from '../config/environment';
@@ -12,7 +12,7 @@ export class DatabaseLifecycle implements OnApplicationBootstrap {
   private readonly logger = new Logger('Database');
 
   constructor(
-    private readonly orm: MikroORM,
+    private readonly orm: MikroORM<AbstractSqlDriver, EntityManager>,
     private readonly config: ConfigService<AppEnvironment, true>,
     private readonly key: SigningKey,
     private readonly head: AuditHead,

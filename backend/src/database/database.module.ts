@@ -1,5 +1,4 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
-import { SqliteDriver } from '@mikro-orm/sqlite';
 import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { AuditModule } from '../audit/audit.module';
@@ -11,8 +10,8 @@ import { DatabaseLifecycle } from './database.lifecycle';
   imports: [
     MikroOrmModule.forRootAsync({
       inject: [ConfigService],
-      // Registers the SQLite-typed MikroORM and EntityManager for injection.
-      driver: SqliteDriver,
+      // No driver named here: the module then registers @mikro-orm/knex's EntityManager (every
+      // SQL driver's), which the services inject, beside the core MikroORM and EntityManager.
       useFactory: (config: ConfigService<AppEnvironment, true>) =>
         createOrmConfig(config.get('databasePath', { infer: true })),
     }),

@@ -1,4 +1,4 @@
-import type { EntityManager } from '@mikro-orm/sqlite';
+import type { EntityManager } from '@mikro-orm/knex';
 import {
   defaultScalingRange,
   type CalculationInputs,

@@ -1,4 +1,4 @@
-import type { MikroORM } from '@mikro-orm/sqlite';
+import type { SqlOrm } from './sql-orm';
 import { AuditEvent } from '../audit/audit-event.entity';
 import type { AuditHead } from '../audit/audit-head';
 import type { AppEnvironment } from '../config/environment';
@@ -8,7 +8,7 @@ import { seedAccounts, type SeedOutcome } from './seed-accounts';
 
 /** Applies the committed migrations, then seeds an empty database. Safe to run again. */
 export async function prepareDatabase(
-  orm: MikroORM,
+  orm: SqlOrm,
   env: Pick<AppEnvironment, 'demoMode' | 'adminEmail' | 'adminPassword'>,
   signing: { key: SigningKey; head: AuditHead },
 ): Promise<{ applied: string[]; seed: SeedOutcome }> {

@@ -1,4 +1,4 @@
-import type { EntityManager } from '@mikro-orm/sqlite';
+import type { EntityManager } from '@mikro-orm/knex';
 import type { AppEnvironment } from '../config/environment';
 import { passwordProblem, personalWords } from '../users/password-policy';
 import { hashPassword } from '../users/password-hasher';

@@ -1,4 +1,4 @@
-import { EntityManager, MikroORM } from '@mikro-orm/sqlite';
+import { EntityManager, MikroORM } from '@mikro-orm/knex';
 import { Controller, Get, ServiceUnavailableException } from '@nestjs/common';
 import type { HealthResponse } from '@tiermode/shared-types';
 import { Public } from '../common/decorators/public.decorator';

@@ -1,4 +1,4 @@
-import { EntityManager, MikroORM } from '@mikro-orm/sqlite';
+import { EntityManager, MikroORM } from '@mikro-orm/knex';
 import { Injectable, Logger, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { MailMessageDto } from '@tiermode/shared-types';

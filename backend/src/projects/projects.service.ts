@@ -1,5 +1,5 @@
 import { ForbiddenError, subject } from '@casl/ability';
-import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/sqlite';
+import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/knex';
 import {
   BadRequestException,
   ConflictException,

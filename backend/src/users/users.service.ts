@@ -1,6 +1,6 @@
 import { subject } from '@casl/ability';
 import { ForbiddenError } from '@casl/ability';
-import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/sqlite';
+import { EntityManager, LockMode, OptimisticLockError } from '@mikro-orm/knex';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { UserDto } from '@tiermode/shared-types';

@@ -2,7 +2,7 @@ import type { INestApplication } from '@nestjs/common';
 import type { CalculationDto, CalculationInputs, MailMessageDto } from '@tiermode/shared-types';
 import request from 'supertest';
 import type { App } from 'supertest/types';
-import { MikroORM } from '@mikro-orm/sqlite';
+import { MikroORM } from '@mikro-orm/knex';
 import { MailMessage } from '../../src/mail/mail-message.entity';
 import { MailService } from '../../src/mail/mail.service';
 import { createTestApp, tokenFor, type DemoRole } from './test-app';
