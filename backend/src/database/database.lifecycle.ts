@@ -1,14 +1,18 @@
 import { MikroORM, type AbstractSqlDriver, type EntityManager } from '@mikro-orm/knex';
-import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
+import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { AppEnvironment } from '../config/environment';
 import { AuditHead } from '../audit/audit-head';
 import { SigningKey } from '../signing/signing-key';
 import { prepareDatabase } from './prepare-database';
 
-/** The server migrates and seeds before it listens, so a bare `npm run serve` also works. */
+/**
+ * The server migrates and seeds before it listens, so a bare `npm run serve` also works. It does
+ * so while the modules initialise, so that every `onApplicationBootstrap` hook (the mail sweep)
+ * finds the database ready.
+ */
 @Injectable()
-export class DatabaseLifecycle implements OnApplicationBootstrap {
+export class DatabaseLifecycle implements OnModuleInit {
   private readonly logger = new Logger('Database');
 
   constructor(
@@ -18,7 +22,7 @@ export class DatabaseLifecycle implements OnApplicationBootstrap {
     private readonly head: AuditHead,
   ) {}
 
-  async onApplicationBootstrap(): Promise<void> {
+  async onModuleInit(): Promise<void> {
     const { applied, seed } = await prepareDatabase(
       this.orm,
       {

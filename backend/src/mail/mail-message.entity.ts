@@ -10,7 +10,7 @@ export type MailStatus = (typeof MAIL_STATUSES)[number];
  */
 @Entity({ tableName: 'mail_messages' })
 export class MailMessage {
-  [OptionalProps]?: 'attempts' | 'lastError' | 'createdAt' | 'sentAt';
+  [OptionalProps]?: 'attempts' | 'lastError' | 'createdAt' | 'sentAt' | 'claimedUntil';
 
   @PrimaryKey({ type: 'uuid' })
   id: string = randomUUID();
@@ -41,4 +41,12 @@ export class MailMessage {
 
   @Property({ type: DateTimeType, nullable: true })
   sentAt: Date | null = null;
+
+  /**
+   * A queued message is free to send when this is null or past. A server sending it first sets
+   * it a while ahead (a claim only one server can win), and after a failed attempt sets it to
+   * the time of the next one.
+   */
+  @Property({ type: DateTimeType, nullable: true })
+  claimedUntil: Date | null = null;
 }

@@ -1,5 +1,11 @@
 import { EntityManager, MikroORM } from '@mikro-orm/knex';
-import { Injectable, Logger, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
+import {
+  Injectable,
+  Logger,
+  OnApplicationBootstrap,
+  OnModuleDestroy,
+  OnModuleInit,
+} from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { MailMessageDto } from '@tiermode/shared-types';
 import { createTransport, type Transporter } from 'nodemailer';
@@ -15,6 +21,13 @@ export const MAIL_CAUTION =
   'the engineer of record decides, and a calc is preliminary until a licensed reviewer locks it.';
 /** Wait before each further attempt; after the last, the message is marked failed. */
 const RETRY_DELAYS_MS = [2_000, 10_000, 60_000, 300_000];
+/** How long a server holds a message it is sending; past it, another may take it over. */
+const CLAIM_MS = 120_000;
+/**
+ * How often each server looks for messages due: those a restart left queued, those another
+ * server failed to send and whose next attempt has come, those whose claim ran out.
+ */
+export const MAIL_SWEEP_MS = 30_000;
 
 export interface OutgoingMail {
   to: string[];
@@ -27,13 +40,18 @@ export interface OutgoingMail {
  * catcher this service starts on a loopback port. A message is queued in the same flush as the
  * action that causes it and delivered after that flush, so a mail failure never loses the
  * action: the message is retried, and its failure is visible in the outbox.
+ *
+ * What is queued survives a restart: the server sends it once it has started, and looks again
+ * every MAIL_SWEEP_MS. With several app servers on one database, each message is claimed by one
+ * of them (a conditional update only one can win) before it is sent, so it is sent once.
  */
 @Injectable()
-export class MailService implements OnModuleInit, OnModuleDestroy {
+export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModuleDestroy {
   private readonly logger = new Logger('Mail');
   private transport?: Transporter;
   private catcher?: MailCatcher;
   private readonly timers = new Set<NodeJS.Timeout>();
+  private sweep?: NodeJS.Timeout;
   private delivering: Promise<void> = Promise.resolve();
 
   constructor(
@@ -53,7 +71,15 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     this.logger.log(`Local mail catcher listening on 127.0.0.1:${port}`);
   }
 
+  /** The database is prepared by now (DatabaseLifecycle, while the modules initialise). */
+  onApplicationBootstrap(): void {
+    this.kick();
+    this.sweep = setInterval(() => this.kick(), MAIL_SWEEP_MS);
+    this.sweep.unref();
+  }
+
   async onModuleDestroy(): Promise<void> {
+    clearInterval(this.sweep);
     this.timers.forEach((t) => clearTimeout(t));
     await this.delivering.catch(() => undefined);
     this.transport?.close();
@@ -116,12 +142,20 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
 
   private async deliverQueued(): Promise<void> {
     const em = this.orm.em.fork();
-    const queued = await em.find(
-      MailMessage,
-      { status: 'queued' },
-      { orderBy: { createdAt: 'asc' } },
-    );
-    for (const message of queued) {
+    const now = new Date();
+    const free = {
+      status: 'queued' as const,
+      $or: [{ claimedUntil: null }, { claimedUntil: { $lte: now } }],
+    };
+    const due = await em.find(MailMessage, free, { orderBy: { createdAt: 'asc' } });
+    for (const message of due) {
+      // Only one server's update finds the message still free; the others leave it alone.
+      const claimedUntil = new Date(Date.now() + CLAIM_MS);
+      if (
+        (await em.nativeUpdate(MailMessage, { id: message.id, ...free }, { claimedUntil })) !== 1
+      ) {
+        continue;
+      }
       message.attempts += 1;
       try {
         await this.transport?.sendMail({
@@ -133,11 +167,18 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
         message.status = 'sent';
         message.sentAt = new Date();
         message.lastError = null;
+        message.claimedUntil = null;
       } catch (error) {
         message.lastError = error instanceof Error ? error.message : String(error);
         const delay = RETRY_DELAYS_MS[message.attempts - 1];
-        if (delay === undefined) message.status = 'failed';
-        else this.retryIn(delay);
+        if (delay === undefined) {
+          message.status = 'failed';
+          message.claimedUntil = null;
+        } else {
+          // Not before then, on any server: this one tries again when it is due.
+          message.claimedUntil = new Date(Date.now() + delay);
+          this.retryIn(delay);
+        }
       }
       await em.flush();
     }

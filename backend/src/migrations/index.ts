@@ -15,6 +15,7 @@ import { Migration20261203073309 } from './Migration20261203073309';
 import { Migration20261203074322 } from './Migration20261203074322';
 import { Migration20261203143328 } from './Migration20261203143328';
 import { Migration20261203171500 } from './Migration20261203171500';
+import { Migration20261205193352 } from './Migration20261205193352';
 
 /** Every committed migration, oldest first. Add each new one here (see DEVELOPERS.md). */
 export const MIGRATIONS: MigrationObject[] = [
@@ -34,4 +35,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203074322', class: Migration20261203074322 },
   { name: 'Migration20261203143328', class: Migration20261203143328 },
   { name: 'Migration20261203171500', class: Migration20261203171500 },
+  { name: 'Migration20261205193352', class: Migration20261205193352 },
 ];
