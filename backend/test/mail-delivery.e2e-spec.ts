@@ -47,7 +47,12 @@ describe('Mail delivery across restarts and app servers', () => {
       const [message] = (await messages(stored, 'Left behind')).filter(
         (m) => m.status !== 'received',
       );
-      expect(message).toMatchObject({ status: 'sent', attempts: 1, lastError: null });
+      expect(message).toMatchObject({
+        status: 'sent',
+        attempts: 1,
+        lastError: null,
+        claimedUntil: null,
+      });
       expect(await received(stored, 'Left behind', 1)).toHaveLength(1);
     } finally {
       await stored.close();

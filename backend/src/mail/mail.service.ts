@@ -156,6 +156,8 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
       ) {
         continue;
       }
+      // Read again as the row now is (claimed), so that what follows is compared with that.
+      await em.refresh(message);
       message.attempts += 1;
       try {
         await this.transport?.sendMail({
